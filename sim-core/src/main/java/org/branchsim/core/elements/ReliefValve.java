@@ -1,0 +1,104 @@
+package org.branchsim.core.elements;
+
+import java.util.List;
+import org.branchsim.core.model.Binder;
+import org.branchsim.core.model.Element;
+import org.branchsim.core.model.EnergyAccount;
+import org.branchsim.core.model.Evaluation;
+import org.branchsim.core.model.Node;
+import org.branchsim.core.model.SignalHandle;
+import org.branchsim.core.model.StateView;
+import org.branchsim.core.parts.Forces;
+import org.branchsim.core.parts.TravelLimitedMass;
+import org.branchsim.core.units.Dimension;
+
+/**
+ * Direct-acting poppet relief valve from inlet to outlet (tank). The poppet (lift x from its seat at 0 to
+ * its stop) obeys m x'' = (p_in - p_out) A_s - (F0 + k x) - c x' - F_flow, where A_s is the seat area and
+ * F_flow the steady flow force. The setting (cracking pressure) is F0 / A_s. Seat and stop are events.
+ * The poppet face displaces A_s x' from the inlet to the outlet side.
+ */
+public final class ReliefValve implements Element {
+    private final String id;
+    private final Node inlet;
+    private final Node outlet;
+    private final PoppetGeometry poppet;
+    private final TravelLimitedMass member;
+    private double density;
+    private double nu;
+    private SignalHandle q;
+    private EnergyAccount loss;
+
+    /**
+     * @param id element id
+     * @param inlet protected line
+     * @param outlet tank side
+     * @param poppet poppet geometry, spring and mass
+     */
+    public ReliefValve(String id, Node inlet, Node outlet, PoppetGeometry poppet) {
+        this.id = id;
+        this.inlet = inlet;
+        this.outlet = outlet;
+        this.poppet = poppet;
+        this.member = new TravelLimitedMass(id, "poppet", poppet.mass(), 0.0, poppet.maxLift(), 0.0, "seat", "lift stop");
+    }
+
+    /** @return the cracking pressure F0 / A_s, Pa */
+    public double setting() {
+        return poppet.preload() / poppet.seatArea();
+    }
+
+    /** @return the poppet (for diagnostics) */
+    public TravelLimitedMass poppet() {
+        return member;
+    }
+
+    @Override
+    public String id() {
+        return id;
+    }
+
+    @Override
+    public List<Node> ports() {
+        return List.of(inlet, outlet);
+    }
+
+    @Override
+    public void bind(Binder b) {
+        density = b.fluid().density();
+        nu = b.fluid().kinematicViscosity();
+        member.bind(b, s -> forces(s).net(), 0.1);
+        q = b.signal("q", Dimension.VOLUME_FLOW);
+        loss = b.account("loss", EnergyAccount.Kind.LOSS);
+    }
+
+    private Forces forces(StateView s) {
+        double x = member.position(s);
+        double v = member.velocity(s);
+        double dp = s.pressure(inlet) - s.pressure(outlet);
+        return new Forces(dp * poppet.seatArea(), -(poppet.preload() + poppet.springRate() * x),
+                -poppet.damping() * v, -poppet.flowForce(x, dp), 0.0);
+    }
+
+    @Override
+    public void evaluate(Evaluation e) {
+        double x = member.position(e);
+        double v = member.velocity(e);
+        double dp = e.pressure(inlet) - e.pressure(outlet);
+        double flow = poppet.flow(x, dp, density, nu);
+        e.flow(inlet, outlet, flow);
+        double displaced = poppet.seatArea() * v;
+        e.inflow(inlet, -displaced);
+        e.inflow(outlet, displaced);
+        member.apply(e, forces(e));
+        if (e.recording()) {
+            e.signal(q, flow);
+            e.power(loss, dp * flow);
+        }
+    }
+
+    @Override
+    public void initialiseModes(StateView state) {
+        member.initialise(state);
+    }
+}

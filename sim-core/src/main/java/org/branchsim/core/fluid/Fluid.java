@@ -1,0 +1,112 @@
+package org.branchsim.core.fluid;
+
+import org.branchsim.core.units.Units;
+
+/**
+ * The hydraulic fluid at its working temperature: density, viscosity and the effective bulk modulus of
+ * oil with entrained air (Merritt, Hydraulic Control Systems, 1967, ch. 2). All values SI: kg/m^3,
+ * m^2/s, Pa. Pressures given to methods are gauge pressures, Pa.
+ */
+public final class Fluid {
+
+    /** Absolute pressure scale below which the bulk modulus is progressively softened (cavitation guard), Pa. */
+    public static final double CAVITATION_SCALE = 5_000.0;
+
+    private final double density;
+    private final double kinematicViscosity;
+    private final double oilBulkModulus;
+    private final double airFraction;
+    private final double gasExponent;
+    private final double temperature;
+
+    /**
+     * @param density density at the working temperature, kg/m^3
+     * @param kinematicViscosity kinematic viscosity at the working temperature, m^2/s
+     * @param oilBulkModulus bulk modulus of air-free oil, Pa
+     * @param airFraction volume fraction of free (entrained) air at atmospheric pressure, 0..1
+     * @param gasExponent polytropic exponent of the air: 1 isothermal, 1.4 adiabatic
+     * @param temperature working temperature, K
+     */
+    public Fluid(double density, double kinematicViscosity, double oilBulkModulus, double airFraction,
+                 double gasExponent, double temperature) {
+        this.density = density;
+        this.kinematicViscosity = kinematicViscosity;
+        this.oilBulkModulus = oilBulkModulus;
+        this.airFraction = airFraction;
+        this.gasExponent = gasExponent;
+        this.temperature = temperature;
+    }
+
+    /**
+     * Density against temperature by thermal expansion, rho(T) = rho15 / (1 + alpha (T - 15 degC))
+     * (common practice; alpha about 7e-4 /K from memory).
+     *
+     * @param density15 density at 15 degC, kg/m^3
+     * @param alpha volumetric expansion coefficient, 1/K
+     * @param temperature temperature, K
+     * @return density, kg/m^3
+     */
+    public static double densityAt(double density15, double alpha, double temperature) {
+        return density15 / (1.0 + alpha * (temperature - 288.15));
+    }
+
+    /** @return density, kg/m^3 */
+    public double density() {
+        return density;
+    }
+
+    /** @return kinematic viscosity, m^2/s */
+    public double kinematicViscosity() {
+        return kinematicViscosity;
+    }
+
+    /** @return dynamic viscosity, Pa*s */
+    public double dynamicViscosity() {
+        return density * kinematicViscosity;
+    }
+
+    /** @return bulk modulus of the air-free oil, Pa */
+    public double oilBulkModulus() {
+        return oilBulkModulus;
+    }
+
+    /** @return free-air volume fraction at atmospheric pressure */
+    public double airFraction() {
+        return airFraction;
+    }
+
+    /** @return working temperature, K */
+    public double temperature() {
+        return temperature;
+    }
+
+    /**
+     * Effective bulk modulus of oil, free air and the container wall in series:
+     * 1/beta_e = 1/beta_oil + 1/beta_wall + (V_gas/V_total)/(n p_abs), with the gas volume following
+     * p V^n = const from its atmospheric amount (Merritt 1967, ch. 2). Near zero absolute pressure the
+     * value is softened smoothly to zero so that a node cannot be drawn below vacuum; this is a numerical
+     * guard, not a cavitation model.
+     *
+     * @param gaugePressure node pressure, Pa gauge
+     * @param wallBulkModulus bulk modulus of the wall (hose, tube), Pa; infinite for a rigid wall
+     * @return effective bulk modulus, Pa
+     */
+    public double effectiveBulkModulus(double gaugePressure, double wallBulkModulus) {
+        double pAbs = gaugePressure + Units.ATMOSPHERE;
+        double compliance = 1.0 / oilBulkModulus + 1.0 / wallBulkModulus;
+        if (airFraction > 0.0) {
+            double pGas = Math.max(pAbs, 1.0);
+            double gasVolume = airFraction * Math.pow(Units.ATMOSPHERE / pGas, 1.0 / gasExponent);
+            double fraction = gasVolume / (1.0 - airFraction + gasVolume);
+            compliance += fraction / (gasExponent * pGas);
+        }
+        return softened(pAbs) / compliance;
+    }
+
+    private static double softened(double pAbs) {
+        if (pAbs <= 0.0) {
+            return 1e-4;
+        }
+        return Math.max(1e-4, -Math.expm1(-pAbs / CAVITATION_SCALE));
+    }
+}

@@ -1,0 +1,30 @@
+package org.branchsim.core.laws;
+
+/**
+ * Steady flow (Bernoulli) force on a metering member: F = 2 Cd Cv A dp cos(theta), acting to close the
+ * opening (Merritt, Hydraulic Control Systems, 1967, jet angle theta about 69 deg for a sharp-edged spool
+ * port with no radial clearance, from memory); equivalently F = rho Q v cos(theta) (Vacca and Franzoni,
+ * Hydraulic Fluid Power, 2021, sec. 3.8.1). For a spool A = w x.
+ */
+public final class FlowForce {
+
+    /** Jet angle of a sharp-edged spool port, rad (69 deg, Merritt 1967, from memory). */
+    public static final double SPOOL_JET_ANGLE = Math.toRadians(69.0);
+    /** Velocity coefficient of a sharp-edged orifice jet (Merritt 1967). */
+    public static final double VELOCITY_COEFFICIENT = 0.98;
+
+    private FlowForce() {
+    }
+
+    /**
+     * @param cd discharge coefficient
+     * @param cv velocity coefficient
+     * @param area metering area, m^2
+     * @param dp pressure difference across the opening (absolute value is used), Pa
+     * @param jetAngle jet angle to the member's axis, rad
+     * @return closing force, N (never negative)
+     */
+    public static double closingForce(double cd, double cv, double area, double dp, double jetAngle) {
+        return 2.0 * cd * cv * area * Math.abs(dp) * Math.cos(jetAngle);
+    }
+}

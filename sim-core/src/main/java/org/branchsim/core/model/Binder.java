@@ -1,0 +1,37 @@
+package org.branchsim.core.model;
+
+import org.branchsim.core.fluid.Fluid;
+import org.branchsim.core.units.Dimension;
+
+/**
+ * What an element may declare when it joins a circuit. Names are given relative to the element
+ * ({@code "spool.x"}); the binder prefixes the element id.
+ */
+public interface Binder {
+
+    /** @return the circuit's fluid */
+    Fluid fluid();
+
+    /**
+     * Declares a state variable.
+     *
+     * @param name relative name, e.g. "spool.x"
+     * @param dimension dimension
+     * @param initial initial value, SI
+     * @param absoluteScale typical magnitude, SI; absolute tolerance = relative tolerance * this
+     * @return the handle
+     */
+    StateSlot state(String name, Dimension dimension, double initial, double absoluteScale);
+
+    /** Declares an output signal with a relative name, e.g. "q". */
+    SignalHandle signal(String name, Dimension dimension);
+
+    /** Declares an energy account with a relative name, e.g. "loss". */
+    EnergyAccount account(String name, EnergyAccount.Kind kind);
+
+    /** Registers a scheduled input (its name is already absolute). */
+    void input(ScheduledInput input);
+
+    /** Registers a discontinuity for the solver to watch. */
+    void discontinuity(Discontinuity discontinuity);
+}

@@ -1,0 +1,21 @@
+package org.branchsim.core.model;
+
+/**
+ * Read access to the circuit's state at one instant: time, states, node pressures and scheduled inputs.
+ */
+public interface StateView {
+
+    /** @return simulated time, s */
+    double time();
+
+    /** @return the value of a state, SI */
+    double value(StateSlot slot);
+
+    /** @return the pressure of a node, Pa gauge */
+    double pressure(Node node);
+
+    /** @return the value of a scheduled input at the current time, SI */
+    default double input(ScheduledInput input) {
+        return input.valueAt(time());
+    }
+}

@@ -1,0 +1,7 @@
+package org.branchsim.core.solve;
+
+/** Integration methods a scenario can choose. */
+public enum Method {
+    /** Adaptive Dormand-Prince 5(4), explicit; fine for non-stiff circuits. */
+    EXPLICIT
+}
