@@ -99,9 +99,18 @@ public final class Circuit {
         return inputs;
     }
 
-    /** @return the discontinuities the solver must watch */
+    /**
+     * @return the discontinuities the solver must watch: the elements' own, and one per corner of every
+     *         scheduled input as the schedule stands now
+     */
     public List<Discontinuity> discontinuities() {
-        return Collections.unmodifiableList(discontinuities);
+        List<Discontinuity> all = new ArrayList<>(discontinuities);
+        for (ScheduledInput in : inputs) {
+            for (double corner : in.corners()) {
+                all.add(new ScheduleCorner(in.name(), corner));
+            }
+        }
+        return Collections.unmodifiableList(all);
     }
 
     /** @return the signal with that name, or null */

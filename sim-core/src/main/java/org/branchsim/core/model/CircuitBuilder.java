@@ -9,8 +9,7 @@ import org.branchsim.core.units.Dimension;
 
 /**
  * Assembles a {@link Circuit}: add nodes, then elements; {@link #build()} binds every element, lays out the
- * state vector (node pressures first, then element states in the order declared) and adds one event per
- * schedule corner.
+ * state vector (node pressures first, then element states in the order declared).
  */
 public final class CircuitBuilder {
 
@@ -117,11 +116,6 @@ public final class CircuitBuilder {
                     discontinuities.add(d);
                 }
             });
-        }
-        for (ScheduledInput in : inputs) {
-            for (double corner : in.corners()) {
-                discontinuities.add(new ScheduleCorner(in.name(), corner));
-            }
         }
         double[] y0 = initial.stream().mapToDouble(Double::doubleValue).toArray();
         return new Circuit(name, fluid, nodeList, elements, states, y0, signals, accounts, inputs,

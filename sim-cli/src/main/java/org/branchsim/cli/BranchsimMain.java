@@ -1,0 +1,69 @@
+package org.branchsim.cli;
+
+import java.io.PrintWriter;
+import org.branchsim.core.error.BranchsimException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * The {@code branchsim} command: simulates hydraulic circuits with a pressure-reducing branch. Exit codes:
+ * 0 success, 1 simulation failed, 2 bad input or usage.
+ */
+@Command(name = "branchsim", mixinStandardHelpOptions = true, version = "branchsim 0.1.0",
+        description = "Time-domain simulation of hydraulic circuits with a pressure-reducing branch.",
+        subcommands = {RunCommand.class, CheckCommand.class, CommandLine.HelpCommand.class},
+        footer = {"", "Exit codes: 0 success, 1 simulation failed, 2 bad input or usage.",
+            "Caution: " + Cautions.SHORT})
+public final class BranchsimMain implements Runnable {
+
+    /** Exit code of a successful run. */
+    public static final int OK = 0;
+    /** Exit code when the simulation fails. */
+    public static final int SIMULATION_FAILED = 1;
+    /** Exit code for bad input or usage. */
+    public static final int BAD_INPUT = 2;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        throw new CommandLine.ParameterException(spec.commandLine(), "a command is needed (run, check)");
+    }
+
+    /** Entry point. */
+    public static void main(String[] args) {
+        System.exit(execute(new PrintWriter(System.out, true), new PrintWriter(System.err, true), args));
+    }
+
+    /**
+     * Runs the command line with the given output streams; never throws.
+     *
+     * @return the exit code
+     */
+    public static int execute(PrintWriter out, PrintWriter err, String... args) {
+        CommandLine cl = new CommandLine(new BranchsimMain());
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setExitCodeExceptionMapper(e -> e instanceof BranchsimException b && !b.key().isInputError()
+                ? SIMULATION_FAILED : BAD_INPUT);
+        cl.setParameterExceptionHandler((ex, a) -> {
+            CommandLine c = ex.getCommandLine();
+            c.getErr().println("error: " + ex.getMessage());
+            c.getErr().println("see '" + c.getCommandSpec().qualifiedName() + " --help'");
+            return BAD_INPUT;
+        });
+        cl.setExecutionExceptionHandler((ex, c, parse) -> {
+            if (ex instanceof BranchsimException b) {
+                c.getErr().println("error: " + b.fullReport());
+                return b.key().isInputError() ? BAD_INPUT : SIMULATION_FAILED;
+            }
+            c.getErr().println("internal error: " + ex);
+            return SIMULATION_FAILED;
+        });
+        int code = cl.execute(args);
+        out.flush();
+        err.flush();
+        return code;
+    }
+}

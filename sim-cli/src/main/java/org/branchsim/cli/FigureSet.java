@@ -1,0 +1,57 @@
+package org.branchsim.cli;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.branchsim.core.results.Trace;
+import org.branchsim.core.scenario.Scenario;
+import org.branchsim.core.units.Dimension;
+import org.branchsim.plots.TraceCharts;
+
+/**
+ * Chooses and writes a run's figures: pressures and flows overlaid, positions stacked (their scales
+ * differ by orders of magnitude), then each plot group the scenario names.
+ */
+public final class FigureSet {
+
+    private FigureSet() {
+    }
+
+    /** Writes the figures into the folder. */
+    public static void write(Scenario scenario, Trace trace, OutputFolder out) {
+        List<String> pressures = TraceCharts.signalsOf(trace, Dimension.PRESSURE);
+        List<String> flows = TraceCharts.signalsOf(trace, Dimension.VOLUME_FLOW);
+        List<String> positions = TraceCharts.signalsOf(trace, Dimension.LENGTH);
+        String name = scenario.name();
+        if (!pressures.isEmpty()) {
+            out.write("pressures.png", p -> TraceCharts.overlay(trace, pressures, name + ": pressures",
+                    scenario.units(), p));
+        }
+        if (!flows.isEmpty()) {
+            out.write("flows.png", p -> TraceCharts.overlay(trace, flows, name + ": flows", scenario.units(), p));
+        }
+        if (!positions.isEmpty()) {
+            out.write("positions.png", p -> TraceCharts.stacked(trace, positions, name + ": positions",
+                    scenario.units(), p));
+        }
+        int k = 1;
+        for (Scenario.PlotGroup g : scenario.plots()) {
+            String file = String.format(Locale.ROOT, "plot-%d-%s.png", k++, slug(g.title()));
+            List<String> signals = new ArrayList<>(g.signals());
+            boolean oneDimension = signals.stream()
+                    .map(s -> trace.columns().get(trace.indexOf(s)).dimension()).distinct().count() == 1;
+            out.write(file, p -> {
+                if (oneDimension) {
+                    TraceCharts.overlay(trace, signals, g.title(), scenario.units(), p);
+                } else {
+                    TraceCharts.stacked(trace, signals, g.title(), scenario.units(), p);
+                }
+            });
+        }
+    }
+
+    static String slug(String title) {
+        String s = title.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-|-$)", "");
+        return s.isEmpty() ? "figure" : s;
+    }
+}

@@ -1,0 +1,105 @@
+package org.branchsim.cli;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.Map;
+import org.branchsim.core.analysis.SignalStatistics;
+import org.branchsim.core.model.EnergyAccount;
+import org.branchsim.core.results.EnergyBalance;
+import org.branchsim.core.results.SimulationResult;
+import org.branchsim.core.results.SolverStatistics;
+import org.branchsim.core.scenario.Scenario;
+import org.branchsim.core.units.Dimension;
+import org.branchsim.core.units.Unit;
+import org.branchsim.core.units.UnitSystem;
+
+/**
+ * Builds metrics.json: per-signal peak, minimum and final values, the energy balance and the solver
+ * statistics, each value with its unit, and the safety caution.
+ */
+public final class MetricsReport {
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private MetricsReport() {
+    }
+
+    /** @return the metrics document */
+    public static ObjectNode build(Scenario scenario, SimulationResult result) {
+        UnitSystem units = scenario.units();
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("scenario", scenario.name());
+        root.put("file", scenario.file());
+        root.put("unitSystem", units.name());
+        root.put("caution", Cautions.SHORT);
+
+        ObjectNode signals = root.putObject("signals");
+        for (SignalStatistics.Summary s : SignalStatistics.of(result.trace())) {
+            Unit u = units.displayUnit(s.dimension());
+            ObjectNode o = signals.putObject(s.name());
+            o.put("unit", u.symbol());
+            o.put("peak", round(u.fromSi(s.peak())));
+            o.put("peakTime_s", round(s.peakTime()));
+            o.put("minimum", round(u.fromSi(s.minimum())));
+            o.put("minimumTime_s", round(s.minimumTime()));
+            o.put("final", round(u.fromSi(s.last())));
+        }
+        root.set("energy", energy(result.energy(), units));
+        root.set("solver", solver(result.statistics()));
+        return root;
+    }
+
+    static ObjectNode energy(EnergyBalance e, UnitSystem units) {
+        Unit u = units.displayUnit(Dimension.ENERGY);
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("unit", u.symbol());
+        o.put("supplied", round(u.fromSi(e.total(EnergyAccount.Kind.SUPPLY))));
+        o.put("lost", round(u.fromSi(e.total(EnergyAccount.Kind.LOSS))));
+        o.put("work", round(u.fromSi(e.total(EnergyAccount.Kind.WORK))));
+        o.put("stored", round(u.fromSi(e.total(EnergyAccount.Kind.STORED))));
+        o.put("flowForceWork", round(u.fromSi(e.total(EnergyAccount.Kind.FLOW_FORCE))));
+        o.put("residual", round(u.fromSi(e.residual())));
+        o.put("residualPercentOfSupplied", round(100.0 * e.relativeResidual()));
+        ObjectNode accounts = o.putObject("accounts");
+        for (Map.Entry<String, Double> a : e.accounts().entrySet()) {
+            ObjectNode ao = accounts.putObject(a.getKey());
+            ao.put("kind", e.kinds().get(a.getKey()).name().toLowerCase(java.util.Locale.ROOT));
+            ao.put("energy", round(u.fromSi(a.getValue())));
+        }
+        return o;
+    }
+
+    static ObjectNode solver(SolverStatistics s) {
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("method", s.method());
+        o.put("acceptedSteps", s.acceptedSteps());
+        o.put("rejectedSteps", s.rejectedSteps());
+        o.put("derivativeEvaluations", s.evaluations());
+        o.put("jacobianEvaluations", s.jacobians());
+        o.put("luFactorisations", s.factorisations());
+        ObjectNode ev = o.putObject("events");
+        s.events().forEach(ev::put);
+        o.put("simulatedTime_s", s.simulatedSeconds());
+        o.put("wallTime_s", round(s.wallSeconds()));
+        return o;
+    }
+
+    /** @return v rounded to 7 significant digits (to keep files readable and stable) */
+    static double round(double v) {
+        if (v == 0.0 || !Double.isFinite(v)) {
+            return v;
+        }
+        return Double.parseDouble(String.format(java.util.Locale.ROOT, "%.7g", v));
+    }
+
+    /** @return the document as indented JSON text */
+    public static String toJson(ObjectNode node) {
+        try {
+            return MAPPER.writeValueAsString(node) + System.lineSeparator();
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+}

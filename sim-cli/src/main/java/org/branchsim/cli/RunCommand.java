@@ -1,0 +1,80 @@
+package org.branchsim.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.branchsim.core.analysis.SignalStatistics;
+import org.branchsim.core.results.SimulationResult;
+import org.branchsim.core.results.SolverStatistics;
+import org.branchsim.core.scenario.Scenario;
+import org.branchsim.core.solve.Simulator;
+import org.branchsim.core.units.Dimension;
+import org.branchsim.core.units.Unit;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/**
+ * {@code branchsim run SCENARIO [--out DIR]}: simulates a scenario and writes trace.csv, metrics.json,
+ * summary.txt and PNG figures into one folder.
+ */
+@Command(name = "run", mixinStandardHelpOptions = true,
+        description = "Simulate a scenario; write trace.csv, metrics.json, summary.txt and PNG figures.")
+public final class RunCommand implements Callable<Integer> {
+
+    @Mixin
+    private ScenarioArgument scenario;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/<scenario name>).")
+    private Path out;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        Scenario s = scenario.load();
+        SimulationResult result = Simulator.run(s.circuit(), s.solver());
+        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name()));
+        String summary = summary(s, result);
+        folder.writeText("trace.csv", TraceCsv.format(result.trace(), s.units()));
+        folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result)));
+        FigureSet.write(s, result.trace(), folder);
+        folder.writeText("summary.txt", summary);
+        PrintWriter w = spec.commandLine().getOut();
+        w.print(summary);
+        w.printf("outputs written to %s:%n", folder.dir());
+        for (Path p : folder.written()) {
+            w.printf("  %s%n", p.getFileName());
+        }
+        return BranchsimMain.OK;
+    }
+
+    static String summary(Scenario s, SimulationResult r) {
+        StringBuilder sb = new StringBuilder();
+        String nl = System.lineSeparator();
+        sb.append("branchsim run: ").append(s.name()).append(" (").append(s.file()).append(')').append(nl);
+        SolverStatistics st = r.statistics();
+        sb.append(String.format(Locale.ROOT,
+                "solver: %s; %.4g s simulated in %.3f s wall; %d steps accepted, %d rejected, %d evaluations, "
+                        + "%d Jacobians, %d LU factorisations, %d events%n",
+                st.method(), st.simulatedSeconds(), st.wallSeconds(), st.acceptedSteps(), st.rejectedSteps(),
+                st.evaluations(), st.jacobians(), st.factorisations(), st.totalEvents()));
+        Unit pu = s.units().displayUnit(Dimension.PRESSURE);
+        sb.append("node pressures [").append(pu.symbol()).append("]: peak (at s) / final").append(nl);
+        for (SignalStatistics.Summary m : SignalStatistics.of(r.trace())) {
+            if (m.dimension() == Dimension.PRESSURE && r.circuit().node(m.name().replace(".p", "")) != null) {
+                sb.append(String.format(Locale.ROOT, "  %-24s %10.2f (%.3f) / %10.2f%n", m.name(), pu.fromSi(m.peak()),
+                        m.peakTime(), pu.fromSi(m.last())));
+            }
+        }
+        Unit eu = s.units().displayUnit(Dimension.ENERGY);
+        sb.append(String.format(Locale.ROOT, "energy: %.4g %s supplied, residual %.3g %% of supplied%n",
+                eu.fromSi(r.energy().total(org.branchsim.core.model.EnergyAccount.Kind.SUPPLY)), eu.symbol(),
+                100 * r.energy().relativeResidual()));
+        sb.append(Cautions.FULL).append(nl);
+        return sb.toString();
+    }
+}

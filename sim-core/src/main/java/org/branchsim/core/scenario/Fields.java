@@ -1,0 +1,251 @@
+package org.branchsim.core.scenario;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+import org.branchsim.core.units.Dimension;
+import org.branchsim.core.units.Quantity;
+import org.branchsim.core.units.Units;
+
+/**
+ * Reads the fields of one scenario object, checking each value and recording a {@link Problem} with file,
+ * line, column and field path for anything wrong. Missing or wrong values read as NaN (or null) so that
+ * reading can go on and report every problem of the file at once. {@link #finish()} reports unknown keys.
+ */
+final class Fields {
+    private final Located.Obj obj;
+    private final String path;
+    private final Problems problems;
+    private final Set<String> known = new LinkedHashSet<>();
+
+    Fields(Located.Obj obj, String path, Problems problems) {
+        this.obj = obj;
+        this.path = path;
+        this.problems = problems;
+    }
+
+    /**
+     * @return Fields over {@code value} when it is an object; otherwise records a problem and returns Fields
+     *         over an empty object
+     */
+    static Fields of(Located value, String path, Problems problems) {
+        if (value instanceof Located.Obj o) {
+            return new Fields(o, path, problems);
+        }
+        problems.add(value, path, "an object { ... }", value == null ? "nothing" : value.describe());
+        return new Fields(new Located.Obj(value == null ? 0 : value.line(), value == null ? 0 : value.column()),
+                path, problems);
+    }
+
+    String path() {
+        return path;
+    }
+
+    String path(String key) {
+        return path.isEmpty() ? key : path + "." + key;
+    }
+
+    Located.Obj node() {
+        return obj;
+    }
+
+    Problems problems() {
+        return problems;
+    }
+
+    boolean has(String key) {
+        known.add(key);
+        return obj.get(key) != null;
+    }
+
+    Located raw(String key) {
+        known.add(key);
+        return obj.get(key);
+    }
+
+    private void missing(String key, String expected) {
+        problems.add(obj, path(key), expected, "no \"" + key + "\" field");
+    }
+
+    /** A dimensioned value that must be present. */
+    double quantity(String key, Dimension d) {
+        Located v = raw(key);
+        if (v == null) {
+            missing(key, "a " + d.humanName() + " such as \"" + example(d) + "\"");
+            return Double.NaN;
+        }
+        return parseQuantity(v, path(key), d);
+    }
+
+    /** A dimensioned value with a default (SI) when absent. */
+    double quantity(String key, Dimension d, double defaultSi) {
+        return has(key) ? quantity(key, d) : defaultSi;
+    }
+
+    /** A dimensioned value that must be above zero. */
+    double positive(String key, Dimension d) {
+        double v = quantity(key, d);
+        return checkPositive(key, v);
+    }
+
+    /** A dimensioned value above zero, with a default (SI) when absent. */
+    double positive(String key, Dimension d, double defaultSi) {
+        double v = quantity(key, d, defaultSi);
+        return has(key) ? checkPositive(key, v) : v;
+    }
+
+    /** A dimensioned value at or above zero that must be present. */
+    double nonNegative(String key, Dimension d) {
+        double v = quantity(key, d);
+        if (!Double.isNaN(v) && v < 0.0) {
+            problems.add(raw(key), path(key), "a value of zero or more", raw(key).describe());
+            return Double.NaN;
+        }
+        return v;
+    }
+
+    /** A dimensioned value at or above zero, with a default (SI) when absent. */
+    double nonNegative(String key, Dimension d, double defaultSi) {
+        double v = quantity(key, d, defaultSi);
+        if (has(key) && !Double.isNaN(v) && v < 0.0) {
+            problems.add(raw(key), path(key), "a value of zero or more", raw(key).describe());
+            return Double.NaN;
+        }
+        return v;
+    }
+
+    private double checkPositive(String key, double v) {
+        if (!Double.isNaN(v) && v <= 0.0) {
+            problems.add(raw(key), path(key), "a value greater than zero", raw(key).describe());
+            return Double.NaN;
+        }
+        return v;
+    }
+
+    /** A plain number (dimensionless) within [min, max], with a default. */
+    double number(String key, double min, double max, double defaultValue) {
+        Located v = raw(key);
+        if (v == null) {
+            return defaultValue;
+        }
+        double x = parseQuantity(v, path(key), Dimension.DIMENSIONLESS);
+        if (!Double.isNaN(x) && (x < min || x > max)) {
+            problems.add(v, path(key), "a number from " + Units.plain(min) + " to " + Units.plain(max), v.describe());
+            return Double.NaN;
+        }
+        return x;
+    }
+
+    /** A text value that must be present. */
+    String text(String key) {
+        Located v = raw(key);
+        if (v == null) {
+            missing(key, "a text value");
+            return null;
+        }
+        if (v instanceof Located.Scalar s && s.isText()) {
+            return (String) s.value();
+        }
+        problems.add(v, path(key), "a text value in quotes", v.describe());
+        return null;
+    }
+
+    /** A text value with a default. */
+    String text(String key, String defaultValue) {
+        return has(key) ? text(key) : defaultValue;
+    }
+
+    /** A boolean with a default. */
+    boolean flag(String key, boolean defaultValue) {
+        Located v = raw(key);
+        if (v == null) {
+            return defaultValue;
+        }
+        if (v instanceof Located.Scalar s && s.value() instanceof Boolean b) {
+            return b;
+        }
+        problems.add(v, path(key), "true or false", v.describe());
+        return defaultValue;
+    }
+
+    /** A nested object, or null when absent. */
+    Fields object(String key) {
+        Located v = raw(key);
+        if (v == null) {
+            return null;
+        }
+        return of(v, path(key), problems);
+    }
+
+    /** A nested list; empty when absent. */
+    List<Located> list(String key) {
+        Located v = raw(key);
+        if (v == null) {
+            return List.of();
+        }
+        if (v instanceof Located.Arr a) {
+            return a.items();
+        }
+        problems.add(v, path(key), "a list [ ... ]", v.describe());
+        return List.of();
+    }
+
+    /** Records one problem against a key. */
+    void problem(String key, String expected, String found) {
+        Located v = obj.get(key);
+        problems.add(v == null ? obj : v, path(key), expected, found);
+    }
+
+    /** Reports keys that were never asked for. */
+    void finish() {
+        for (String key : obj.keys()) {
+            if (!known.contains(key)) {
+                int[] at = obj.keyLocation(key);
+                problems.addAt(at[0], at[1], path(key), "one of the fields " + String.join(", ", new ArrayList<>(known)),
+                        "unknown field \"" + key + "\"");
+            }
+        }
+    }
+
+    /** Parses a dimensioned value at a location. */
+    static double parseQuantity(Located v, String path, Dimension d, Problems problems) {
+        if (v instanceof Located.Scalar s) {
+            if (s.isNumber()) {
+                if (d == Dimension.DIMENSIONLESS) {
+                    return ((Number) s.value()).doubleValue();
+                }
+                problems.add(v, path, "a " + d.humanName() + " with its unit, such as \"" + example(d) + "\"",
+                        v.describe() + " (a number without unit)");
+                return Double.NaN;
+            }
+            if (s.isText()) {
+                Quantity.Parsed p = Quantity.parse((String) s.value(), d);
+                if (p.ok()) {
+                    return p.si();
+                }
+                problems.add(v, path, p.error(), v.describe());
+                return Double.NaN;
+            }
+        }
+        problems.add(v, path, d == Dimension.DIMENSIONLESS ? "a number"
+                : "a " + d.humanName() + " such as \"" + example(d) + "\"", v.describe());
+        return Double.NaN;
+    }
+
+    private double parseQuantity(Located v, String p, Dimension d) {
+        return parseQuantity(v, p, d, problems);
+    }
+
+    static String example(Dimension d) {
+        List<String> symbols = Units.symbolsOf(d);
+        String unit = symbols.isEmpty() ? d.siSymbol() : symbols.get(Math.min(symbols.size() - 1,
+                d == Dimension.PRESSURE ? 4 : d == Dimension.VOLUME_FLOW ? 1 : d == Dimension.LENGTH ? 2 : 0));
+        return "1 " + unit;
+    }
+
+    /** @return a number for messages */
+    static String format(double v) {
+        return Units.plain(v);
+    }
+}

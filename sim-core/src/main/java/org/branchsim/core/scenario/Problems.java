@@ -1,0 +1,39 @@
+package org.branchsim.core.scenario;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.error.Problem;
+
+/** Collects the problems of one scenario so that a user sees all of them at once. */
+final class Problems {
+    private final String file;
+    private final List<Problem> list = new ArrayList<>();
+
+    Problems(String file) {
+        this.file = file;
+    }
+
+    String file() {
+        return file;
+    }
+
+    void add(Located at, String path, String expected, String found) {
+        list.add(new Problem(file, at == null ? 0 : at.line(), at == null ? 0 : at.column(), path, expected, found));
+    }
+
+    void addAt(int line, int column, String path, String expected, String found) {
+        list.add(new Problem(file, line, column, path, expected, found));
+    }
+
+    boolean isEmpty() {
+        return list.isEmpty();
+    }
+
+    void throwIfAny() {
+        if (!list.isEmpty()) {
+            throw new BranchsimException(ErrorKey.SCENARIO_INVALID, list, null, file, list.size());
+        }
+    }
+}

@@ -1,0 +1,31 @@
+package org.branchsim.core.scenario;
+
+import java.util.List;
+import org.branchsim.core.model.Circuit;
+import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.units.UnitSystem;
+
+/**
+ * A scenario read and checked: the circuit to simulate, how to solve it and how to present the results.
+ *
+ * @param name scenario name (used for the output folder)
+ * @param description free text from the file
+ * @param file where it was read from
+ * @param circuit the circuit, ready to run once
+ * @param solver solver settings
+ * @param units unit system of the outputs
+ * @param plots plot groups the scenario asks for, besides the standard ones
+ * @param document the parsed document, for building variants (sweeps)
+ */
+public record Scenario(String name, String description, String file, Circuit circuit, SolverSettings solver,
+                       UnitSystem units, List<PlotGroup> plots, Located document) {
+
+    /**
+     * A figure the scenario asks for.
+     *
+     * @param title figure title
+     * @param signals signal names to draw
+     */
+    public record PlotGroup(String title, List<String> signals) {
+    }
+}

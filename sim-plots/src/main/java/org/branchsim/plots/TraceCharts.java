@@ -1,0 +1,164 @@
+package org.branchsim.plots;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.branchsim.core.results.Trace;
+import org.branchsim.core.units.Dimension;
+import org.branchsim.core.units.Unit;
+import org.branchsim.core.units.UnitSystem;
+import org.jfree.chart.ChartUtils;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.CombinedDomainXYPlot;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.title.TextTitle;
+import org.jfree.chart.ui.RectangleEdge;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/**
+ * Draws time histories of a trace as PNG figures: several signals of one dimension overlaid on one axis, or
+ * stacked on panels with a shared time axis when their scales differ (positions of a poppet and a piston).
+ * Axes carry the display unit of the chosen unit system; every figure carries the simulation caution.
+ */
+public final class TraceCharts {
+
+    /** Footnote on every figure. */
+    public static final String CAUTION =
+            "Simulation result, not a measurement: verify on the machine by test (ISO 4413).";
+    /** Figure width, px. */
+    public static final int WIDTH = 1100;
+    /** Height of one panel, px. */
+    public static final int PANEL_HEIGHT = 360;
+
+    private static final Color[] PALETTE = {
+        new Color(0x1f5fa8), new Color(0xc8102e), new Color(0x2e8b57), new Color(0xe07b00),
+        new Color(0x6a3d9a), new Color(0x008b8b), new Color(0x8b5a2b), new Color(0x444444)
+    };
+
+    private TraceCharts() {
+    }
+
+    /**
+     * Draws signals overlaid on one axis; all must share one dimension.
+     *
+     * @param trace the trace
+     * @param signals signal names
+     * @param title figure title
+     * @param units unit system for the axis
+     * @param file PNG to write
+     * @throws IOException when the file cannot be written
+     */
+    public static void overlay(Trace trace, List<String> signals, String title, UnitSystem units, Path file)
+            throws IOException {
+        requireSignals(trace, signals);
+        Dimension d = trace.columns().get(trace.indexOf(signals.get(0))).dimension();
+        XYPlot plot = panel(trace, signals, units, axisLabel(signals.size() == 1 ? signals.get(0) : null, d, units));
+        JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true);
+        save(chart, file, PANEL_HEIGHT + 120);
+    }
+
+    /**
+     * Draws each signal on its own panel with a shared time axis.
+     *
+     * @param trace the trace
+     * @param signals signal names
+     * @param title figure title
+     * @param units unit system for the axes
+     * @param file PNG to write
+     * @throws IOException when the file cannot be written
+     */
+    public static void stacked(Trace trace, List<String> signals, String title, UnitSystem units, Path file)
+            throws IOException {
+        requireSignals(trace, signals);
+        CombinedDomainXYPlot combined = new CombinedDomainXYPlot(timeAxis());
+        combined.setGap(8.0);
+        int k = 0;
+        for (String s : signals) {
+            Dimension d = trace.columns().get(trace.indexOf(s)).dimension();
+            XYPlot p = panel(trace, List.of(s), units, axisLabel(s, d, units));
+            p.getRenderer().setSeriesPaint(0, PALETTE[k++ % PALETTE.length]);
+            combined.add(p, 1);
+        }
+        JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, combined, false);
+        int height = Math.max(PANEL_HEIGHT, 60 + 190 * signals.size());
+        save(chart, file, height);
+    }
+
+    private static void requireSignals(Trace trace, List<String> signals) {
+        if (signals.isEmpty()) {
+            throw new IllegalArgumentException("no signals to draw");
+        }
+        for (String s : signals) {
+            if (trace.indexOf(s) < 0) {
+                throw new IllegalArgumentException("the trace has no signal " + s);
+            }
+        }
+    }
+
+    private static String axisLabel(String signal, Dimension d, UnitSystem units) {
+        Unit u = units.displayUnit(d);
+        String what = signal != null ? signal : d.humanName();
+        return what + " [" + u.symbol() + "]";
+    }
+
+    private static NumberAxis timeAxis() {
+        NumberAxis t = new NumberAxis("time [s]");
+        t.setAutoRangeIncludesZero(false);
+        return t;
+    }
+
+    private static XYPlot panel(Trace trace, List<String> signals, UnitSystem units, String label) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        double[] times = trace.times();
+        for (String s : signals) {
+            int i = trace.indexOf(s);
+            Unit u = units.displayUnit(trace.columns().get(i).dimension());
+            XYSeries series = new XYSeries(s, false, true);
+            double[] values = trace.series(i);
+            for (int k = 0; k < values.length; k++) {
+                series.add(times[k], u.fromSi(values[k]), false);
+            }
+            data.addSeries(series);
+        }
+        NumberAxis y = new NumberAxis(label);
+        y.setAutoRangeIncludesZero(false);
+        y.setAutoRangeMinimumSize(1e-9);
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        for (int k = 0; k < signals.size(); k++) {
+            renderer.setSeriesPaint(k, PALETTE[k % PALETTE.length]);
+            renderer.setSeriesStroke(k, new BasicStroke(1.6f));
+        }
+        XYPlot plot = new XYPlot(data, timeAxis(), y, renderer);
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setDomainGridlinePaint(new Color(0xd0d0d0));
+        plot.setRangeGridlinePaint(new Color(0xd0d0d0));
+        return plot;
+    }
+
+    private static void save(JFreeChart chart, Path file, int height) throws IOException {
+        chart.setBackgroundPaint(Color.WHITE);
+        TextTitle note = new TextTitle(CAUTION, new Font(Font.SANS_SERIF, Font.ITALIC, 11));
+        note.setPosition(RectangleEdge.BOTTOM);
+        note.setPaint(new Color(0x555555));
+        chart.addSubtitle(note);
+        ChartUtils.saveChartAsPNG(file.toFile(), chart, WIDTH, height);
+    }
+
+    /** @return the names of a trace's signals of one dimension, in trace order */
+    public static List<String> signalsOf(Trace trace, Dimension d) {
+        List<String> out = new ArrayList<>();
+        for (Trace.Column c : trace.columns()) {
+            if (c.dimension() == d) {
+                out.add(c.name());
+            }
+        }
+        return out;
+    }
+}
