@@ -10,7 +10,8 @@ import org.branchsim.plots.TraceCharts;
 
 /**
  * Chooses and writes a run's figures: pressures and flows overlaid, positions stacked (their scales
- * differ by orders of magnitude), then each plot group the scenario names.
+ * differ by orders of magnitude), then each plot group the scenario names (overlaid when its signals share
+ * a dimension other than length, stacked otherwise).
  */
 public final class FigureSet {
 
@@ -38,8 +39,10 @@ public final class FigureSet {
         for (Scenario.PlotGroup g : scenario.plots()) {
             String file = String.format(Locale.ROOT, "plot-%d-%s.png", k++, slug(g.title()));
             List<String> signals = new ArrayList<>(g.signals());
-            boolean oneDimension = signals.stream()
-                    .map(s -> trace.columns().get(trace.indexOf(s)).dimension()).distinct().count() == 1;
+            List<Dimension> dims = signals.stream()
+                    .map(s -> trace.columns().get(trace.indexOf(s)).dimension()).distinct().toList();
+            // positions of different members differ by orders of magnitude: give each its own panel
+            boolean oneDimension = dims.size() == 1 && dims.get(0) != Dimension.LENGTH;
             out.write(file, p -> {
                 if (oneDimension) {
                     TraceCharts.overlay(trace, signals, g.title(), scenario.units(), p);

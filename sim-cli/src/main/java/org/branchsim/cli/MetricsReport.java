@@ -3,7 +3,10 @@ package org.branchsim.cli;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.List;
+import org.branchsim.core.analysis.ReducingValveMetrics;
 import java.util.Map;
 import org.branchsim.core.analysis.SignalStatistics;
 import org.branchsim.core.model.EnergyAccount;
@@ -46,9 +49,51 @@ public final class MetricsReport {
             o.put("minimumTime_s", round(s.minimumTime()));
             o.put("final", round(u.fromSi(s.last())));
         }
+        root.set("reducingValves", reducingValves(ReducingValveMetrics.of(result, scenario.metricsFrom(),
+                scenario.metricsTo()), units, scenario.metricsFrom(), scenario.metricsTo()));
         root.set("energy", energy(result.energy(), units));
         root.set("solver", solver(result.statistics()));
         return root;
+    }
+
+    static ArrayNode reducingValves(List<ReducingValveMetrics> list, UnitSystem units, double from, double to) {
+        Unit p = units.displayUnit(Dimension.PRESSURE);
+        Unit q = units.displayUnit(Dimension.VOLUME_FLOW);
+        Unit w = units.displayUnit(Dimension.POWER);
+        ArrayNode arr = MAPPER.createArrayNode();
+        for (ReducingValveMetrics m : list) {
+            ObjectNode o = arr.addObject();
+            o.put("id", m.id());
+            o.put("pressureUnit", p.symbol());
+            o.put("flowUnit", q.symbol());
+            o.put("powerUnit", w.symbol());
+            o.put("windowFrom_s", from);
+            o.put("windowTo_s", to);
+            o.put("setting", round(p.fromSi(m.setting())));
+            o.put("peakOutlet", round(p.fromSi(m.peak())));
+            o.put("peakTime_s", round(m.peakTime()));
+            o.put("steadyOutlet", round(p.fromSi(m.steady())));
+            o.put("overshoot", round(p.fromSi(m.overshoot()) - p.fromSi(0.0)));
+            o.put("overshootPercentOfSetting", round(m.overshootPercent()));
+            o.put("deviationFromSetting", round(p.fromSi(m.deviation()) - p.fromSi(0.0)));
+            o.put("deviationPercentOfSetting", round(m.deviationPercent()));
+            o.put("settlingBandPercentOfSetting", 100.0 * ReducingValveMetrics.BAND);
+            o.put("settled", m.settled());
+            putNumber(o, "settledAt_s", m.settledAt());
+            putNumber(o, "settlingTime_s", m.settlingTime());
+            o.put("steadyDrainFlow", round(q.fromSi(m.drainFlow())));
+            o.put("steadyDrainPower", round(w.fromSi(m.drainPower())));
+            o.put("steadyMeteringPower", round(w.fromSi(m.meteringPower())));
+        }
+        return arr;
+    }
+
+    private static void putNumber(ObjectNode o, String key, double v) {
+        if (Double.isFinite(v)) {
+            o.put(key, round(v));
+        } else {
+            o.putNull(key);
+        }
     }
 
     static ObjectNode energy(EnergyBalance e, UnitSystem units) {

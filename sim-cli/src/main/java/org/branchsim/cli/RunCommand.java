@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.analysis.SignalStatistics;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.SolverStatistics;
@@ -69,6 +70,22 @@ public final class RunCommand implements Callable<Integer> {
                 sb.append(String.format(Locale.ROOT, "  %-24s %10.2f (%.3f) / %10.2f%n", m.name(), pu.fromSi(m.peak()),
                         m.peakTime(), pu.fromSi(m.last())));
             }
+        }
+        Unit qu = s.units().displayUnit(Dimension.VOLUME_FLOW);
+        Unit wu = s.units().displayUnit(Dimension.POWER);
+        for (ReducingValveMetrics m : ReducingValveMetrics.of(r, s.metricsFrom(), s.metricsTo())) {
+            sb.append(String.format(Locale.ROOT,
+                    "reducing valve %s (%.3g s to %.3g s): setting %.2f %s, steady %.2f (%+.2f %%), peak %.2f at %.3f s, "
+                            + "overshoot %.2f %s (%.1f %% of setting), %s; drain %.3f %s, pilot loss %.3g %s, "
+                            + "metering loss %.3g %s%n",
+                    m.id(), s.metricsFrom(), s.metricsTo(), pu.fromSi(m.setting()), pu.symbol(), pu.fromSi(m.steady()),
+                    m.deviationPercent(), pu.fromSi(m.peak()), m.peakTime(), pu.fromSi(m.overshoot()) - pu.fromSi(0),
+                    pu.symbol(), m.overshootPercent(),
+                    !m.settled() ? "not settled in +-2 % band"
+                            : Double.isNaN(m.settlingTime()) ? String.format(Locale.ROOT, "in +-2 %% band from %.3f s", m.settledAt())
+                            : String.format(Locale.ROOT, "settles in +-2 %% band in %.3f s (at %.3f s)", m.settlingTime(), m.settledAt()),
+                    qu.fromSi(m.drainFlow()), qu.symbol(), wu.fromSi(m.drainPower()), wu.symbol(),
+                    wu.fromSi(m.meteringPower()), wu.symbol()));
         }
         Unit eu = s.units().displayUnit(Dimension.ENERGY);
         sb.append(String.format(Locale.ROOT, "energy: %.4g %s supplied, residual %.3g %% of supplied%n",

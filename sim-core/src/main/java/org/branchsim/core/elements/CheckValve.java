@@ -18,6 +18,9 @@ import org.branchsim.core.units.Dimension;
  * of the area curve). Reverse flow is blocked (the seat is tight).
  */
 public final class CheckValve implements Element {
+    /** Offset of the cracking event, Pa, so that its switching function is never identically zero. */
+    private static final double THRESHOLD_OFFSET = 1e-3;
+
     private final String id;
     private final Node inlet;
     private final Node outlet;
@@ -69,7 +72,7 @@ public final class CheckValve implements Element {
         openingSignal = b.signal("opening", Dimension.DIMENSIONLESS);
         loss = b.account("loss", EnergyAccount.Kind.LOSS);
         b.discontinuity(new Corner(id, "cracks open", "corner",
-                s -> s.pressure(inlet) - s.pressure(outlet) - crackingPressure));
+                s -> s.pressure(inlet) - s.pressure(outlet) - crackingPressure - THRESHOLD_OFFSET));
         b.discontinuity(new Corner(id, "fully open", "corner",
                 s -> s.pressure(inlet) - s.pressure(outlet) - crackingPressure - fullOpenSpan));
     }

@@ -66,6 +66,7 @@ public final class CircuitBuilder {
                 states.add(slot);
                 initial.add(n.initialPressure());
             } else {
+                inputs.add(n.tankPressure());
                 tankAccounts[nodeIndex] = new EnergyAccount(accounts.size(), n.id() + ".return", EnergyAccount.Kind.LOSS);
                 accounts.add(tankAccounts[nodeIndex]);
             }

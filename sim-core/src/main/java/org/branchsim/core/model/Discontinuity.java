@@ -26,7 +26,10 @@ public interface Discontinuity {
     /** @return the element or node id it belongs to */
     String owner();
 
-    /** @return the switching function; a sign change marks the event */
+    /**
+     * @return the switching function; a sign change marks the event. It must not stay at exactly zero over
+     *         an interval (Hipparchus then cannot tell its sign): offset thresholds by a negligible amount.
+     */
     double g(StateView state);
 
     /**

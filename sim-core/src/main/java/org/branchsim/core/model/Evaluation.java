@@ -35,7 +35,7 @@ public final class Evaluation implements StateEditor {
         Arrays.fill(nodeInflow, 0.0);
         Arrays.fill(nodeExtraVolume, 0.0);
         for (Node n : nodes) {
-            nodePressure[n.index()] = n.isTank() ? n.initialPressure() : state[n.pressureSlot().index()];
+            nodePressure[n.index()] = n.isTank() ? n.tankPressure().valueAt(time) : state[n.pressureSlot().index()];
         }
         if (derivative != null) {
             Arrays.fill(derivative, 0.0);

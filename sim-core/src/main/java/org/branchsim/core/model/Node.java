@@ -1,7 +1,8 @@
 package org.branchsim.core.model;
 
 /**
- * A hydraulic node: a lumped volume of fluid at one pressure (gauge, Pa), or a tank whose pressure is fixed.
+ * A hydraulic node: a lumped volume of fluid at one pressure (gauge, Pa), or a tank whose pressure is imposed
+ * (fixed, or following a schedule as an ideal pressure source).
  * The volume's pressure obeys dp/dt = beta_e(p) / V * (sum of inflows - dV/dt) (Merritt 1967, ch. 2);
  * moving boundaries (cylinder chambers, spool ends) add their volume and their displacement flow.
  */
@@ -11,6 +12,7 @@ public final class Node {
     private final double wallBulkModulus;
     private final double initialPressure;
     private final boolean tank;
+    private final ScheduledInput tankPressure;
     private int index = -1;
     private StateSlot pressureSlot;
     private SignalHandle pressureSignal;
@@ -21,6 +23,8 @@ public final class Node {
         this.wallBulkModulus = wallBulkModulus;
         this.initialPressure = initialPressure;
         this.tank = tank;
+        this.tankPressure = tank ? new ScheduledInput(id + ".pressure", org.branchsim.core.units.Dimension.PRESSURE,
+                initialPressure) : null;
     }
 
     /**
@@ -36,7 +40,8 @@ public final class Node {
 
     /**
      * @param id node name
-     * @param pressure fixed pressure, Pa gauge (0 for a vented tank)
+     * @param pressure pressure, Pa gauge (0 for a vented tank); it may follow a schedule, which makes the
+     *        tank an ideal pressure source
      * @return a tank node
      */
     public static Node tank(String id, double pressure) {
@@ -81,7 +86,12 @@ public final class Node {
         return initialPressure;
     }
 
-    /** @return true for a tank (fixed pressure, no state) */
+    /** @return the tank's pressure schedule, Pa (null for a volume node) */
+    public ScheduledInput tankPressure() {
+        return tankPressure;
+    }
+
+    /** @return true for a tank (imposed pressure, no state) */
     public boolean isTank() {
         return tank;
     }

@@ -23,6 +23,12 @@ public final class TravelLimitedMass {
     /** Where the member is. */
     public enum Mode { FREE, AT_LOWER_STOP, AT_UPPER_STOP }
 
+    /**
+     * Net force, N, that must pull a held member off its stop. A force balanced to exactly zero (a piston
+     * with no pressure and no load) keeps it held, and the switching function is never identically zero.
+     */
+    public static final double RELEASE_FORCE = 1e-6;
+
     private final String owner;
     private final String name;
     private final double mass;
@@ -162,9 +168,9 @@ public final class TravelLimitedMass {
     public void initialise(StateView s) {
         double pos = s.value(x);
         double f = netForce.at(s);
-        if (pos <= lower && f <= 0.0) {
+        if (pos <= lower && f <= RELEASE_FORCE) {
             mode = Mode.AT_LOWER_STOP;
-        } else if (pos >= upper && f >= 0.0) {
+        } else if (pos >= upper && f >= -RELEASE_FORCE) {
             mode = Mode.AT_UPPER_STOP;
         } else {
             mode = Mode.FREE;
@@ -203,7 +209,7 @@ public final class TravelLimitedMass {
                 return isLower ? s.value(x) - lower : upper - s.value(x);
             } else if (mode == held) {
                 double f = netForce.at(s);
-                return isLower ? f : -f;
+                return (isLower ? f : -f) - RELEASE_FORCE;
             } else if (mode == other) {
                 return upper - lower;
             }

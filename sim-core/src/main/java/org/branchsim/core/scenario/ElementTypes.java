@@ -11,6 +11,7 @@ import org.branchsim.core.elements.PoppetGeometry;
 import org.branchsim.core.elements.Pump;
 import org.branchsim.core.elements.ReliefValve;
 import org.branchsim.core.elements.ValveEdge;
+import org.branchsim.core.fluid.Fluid;
 import org.branchsim.core.model.Element;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.units.Dimension;
@@ -27,24 +28,24 @@ final class ElementTypes {
     private static final Map<String, ElementReader> READERS = new LinkedHashMap<>();
 
     static {
-        register("pump", List.of("inlet", "outlet"), (id, f, n) -> {
+        register("pump", List.of("inlet", "outlet"), (id, f, n, fluid) -> {
             double d = f.positive("displacement", Dimension.DISPLACEMENT);
             double speed = f.nonNegative("speed", Dimension.ROTATIONAL_SPEED);
             double eta = f.number("volumetricEfficiency", 0.01, 1.0, 1.0);
             return Geometry.ok(d, speed, eta) ? new Pump(id, n.get("inlet"), n.get("outlet"), d, speed, eta) : null;
         });
-        register("orifice", List.of("a", "b"), (id, f, n) -> {
+        register("orifice", List.of("a", "b"), (id, f, n, fluid) -> {
             double area = Geometry.area(f, "diameter", "area");
             double cd = f.number("cd", 0.05, 1.0, SHARP_EDGE_CD);
             return Geometry.ok(area, cd) ? new Orifice(id, n.get("a"), n.get("b"), area, cd) : null;
         });
-        register("valveEdge", List.of("a", "b"), (id, f, n) -> {
+        register("valveEdge", List.of("a", "b"), (id, f, n, fluid) -> {
             double area = Geometry.area(f, "diameter", "area");
             double cd = f.number("cd", 0.05, 1.0, SHARP_EDGE_CD);
             double opening = f.number("opening", 0.0, 1.0, 0.0);
             return Geometry.ok(area, cd, opening) ? new ValveEdge(id, n.get("a"), n.get("b"), area, cd, opening) : null;
         });
-        register("checkValve", List.of("inlet", "outlet"), (id, f, n) -> {
+        register("checkValve", List.of("inlet", "outlet"), (id, f, n, fluid) -> {
             double crack = f.nonNegative("crackingPressure", Dimension.PRESSURE);
             double span = f.positive("fullOpenAbove", Dimension.PRESSURE, 2e5);
             double area = Geometry.area(f, "diameter", "area");
@@ -52,12 +53,14 @@ final class ElementTypes {
             return Geometry.ok(crack, span, area, cd)
                     ? new CheckValve(id, n.get("inlet"), n.get("outlet"), crack, span, area, cd) : null;
         });
-        register("reliefValve", List.of("inlet", "outlet"), (id, f, n) -> {
+        register("reliefValve", List.of("inlet", "outlet"), (id, f, n, fluid) -> {
             PoppetGeometry g = readPoppet(f, "setting");
             return g == null ? null : new ReliefValve(id, n.get("inlet"), n.get("outlet"), g);
         });
         register("cylinder", List.of("capEnd", "rodEnd"), ElementTypes::readCylinder);
-        register("motor", List.of("a", "b"), (id, f, n) -> {
+        register("pilotReducingValve", List.of("inlet", "outlet", "drain"), ReducingValveReaders::pilotOperated);
+        register("directReducingValve", List.of("inlet", "outlet", "drain"), ReducingValveReaders::directActing);
+        register("motor", List.of("a", "b"), (id, f, n, fluid) -> {
             double d = f.positive("displacement", Dimension.DISPLACEMENT);
             double j = f.positive("inertia", Dimension.ROTATIONAL_INERTIA);
             double b = f.nonNegative("damping", Dimension.ROTARY_DAMPING, 0.0);
@@ -85,8 +88,8 @@ final class ElementTypes {
             }
 
             @Override
-            public Element read(String id, Fields f, Map<String, Node> nodes) {
-                return reader.read(id, f, nodes);
+            public Element read(String id, Fields f, Map<String, Node> nodes, Fluid fluid) {
+                return reader.read(id, f, nodes, fluid);
             }
         });
     }
@@ -94,7 +97,7 @@ final class ElementTypes {
     /** The reading part of an {@link ElementReader}. */
     @FunctionalInterface
     interface Reader {
-        Element read(String id, Fields f, Map<String, Node> nodes);
+        Element read(String id, Fields f, Map<String, Node> nodes, Fluid fluid);
     }
 
     static ElementReader find(String type) {
@@ -110,6 +113,16 @@ final class ElementTypes {
      * = preload / seat area) or is given directly as {@code preload}.
      */
     static PoppetGeometry readPoppet(Fields f, String settingKey) {
+        PoppetGeometry body = readPoppetBody(f);
+        double preload = body == null ? Double.NaN : preload(f, settingKey, body.seatDiameter());
+        if (body == null || Double.isNaN(preload)) {
+            return null;
+        }
+        return body.withPreload(preload);
+    }
+
+    /** Reads a poppet's seat, spring, mass, damping and lift, without its preload (set to 0). */
+    static PoppetGeometry readPoppetBody(Fields f) {
         double seat = f.positive("seatDiameter", Dimension.LENGTH);
         double cone = f.positive("coneAngle", Dimension.ANGLE, Math.toRadians(90.0));
         if (!Double.isNaN(cone) && cone > Math.PI) {
@@ -121,11 +134,10 @@ final class ElementTypes {
         double damping = f.nonNegative("damping", Dimension.DAMPING, 0.0);
         double maxLift = f.positive("maxLift", Dimension.LENGTH);
         double cd = f.number("cd", 0.05, 1.0, SHARP_EDGE_CD);
-        double preload = preload(f, settingKey, seat);
-        if (!Geometry.ok(seat, cone, rate, mass, damping, maxLift, cd, preload)) {
+        if (!Geometry.ok(seat, cone, rate, mass, damping, maxLift, cd)) {
             return null;
         }
-        return new PoppetGeometry(seat, cone, rate, preload, mass, damping, maxLift, cd);
+        return new PoppetGeometry(seat, cone, rate, 0.0, mass, damping, maxLift, cd);
     }
 
     private static double preload(Fields f, String settingKey, double seat) {
@@ -143,7 +155,7 @@ final class ElementTypes {
         return setting * 0.25 * Math.PI * seat * seat;
     }
 
-    private static Element readCylinder(String id, Fields f, Map<String, Node> n) {
+    private static Element readCylinder(String id, Fields f, Map<String, Node> n, Fluid fluid) {
         double bore = f.positive("bore", Dimension.LENGTH);
         double rod = f.positive("rod", Dimension.LENGTH);
         if (Geometry.ok(bore, rod) && rod >= bore) {

@@ -15,10 +15,13 @@ import org.branchsim.core.units.UnitSystem;
  * @param solver solver settings
  * @param units unit system of the outputs
  * @param plots plot groups the scenario asks for, besides the standard ones
+ * @param metricsFrom start of the window for regulation metrics, s (leaves start-up out)
+ * @param metricsTo end of that window, s (the end time unless given)
  * @param document the parsed document, for building variants (sweeps)
  */
 public record Scenario(String name, String description, String file, Circuit circuit, SolverSettings solver,
-                       UnitSystem units, List<PlotGroup> plots, Located document) {
+                       UnitSystem units, List<PlotGroup> plots, double metricsFrom, double metricsTo,
+                       Located document) {
 
     /**
      * A figure the scenario asks for.

@@ -65,7 +65,7 @@ public final class ScenarioLoader {
         CircuitBuilder builder = new CircuitBuilder(name == null ? "scenario" : name, fluid);
         Map<String, Located> idLocations = new LinkedHashMap<>();
         Map<String, Node> nodes = readNodes(root, builder, idLocations, problems);
-        Map<String, Element> elements = readElements(root, builder, nodes, idLocations, problems);
+        Map<String, Element> elements = readElements(root, builder, nodes, idLocations, fluid, problems);
         checkEveryNodeUsed(root, nodes, elements.values(), problems);
 
         Map<String, ScheduledInput> inputs = new LinkedHashMap<>();
@@ -80,15 +80,28 @@ public final class ScenarioLoader {
         SolverSettings solver = readSolver(root.object("solver"), root, problems);
         UnitSystem units = UnitSystem.SI;
         List<Scenario.PlotGroup> plots = new ArrayList<>();
+        double metricsFrom = 0.0;
+        double metricsTo = solver == null ? Double.NaN : solver.endTime();
         Fields out = root.object("outputs");
         if (out != null) {
             units = readUnits(out);
             plots = readPlots(out, circuit);
+            metricsFrom = out.nonNegative("metricsFrom", Dimension.TIME, 0.0);
+            if (solver != null && Geometry.ok(metricsFrom) && metricsFrom >= solver.endTime()) {
+                out.problem("metricsFrom", "a time before the end time (" + Units.plain(solver.endTime()) + " s)",
+                        out.raw("metricsFrom").describe());
+            }
+            metricsTo = out.positive("metricsTo", Dimension.TIME, metricsTo);
+            if (out.has("metricsTo") && Geometry.ok(metricsFrom, metricsTo) && metricsTo <= metricsFrom) {
+                out.problem("metricsTo", "a time after metricsFrom (" + Units.plain(metricsFrom) + " s)",
+                        out.raw("metricsTo").describe());
+            }
             out.finish();
         }
         root.finish();
         problems.throwIfAny();
-        return new Scenario(name, description, fileName, circuit, solver, units, plots, document);
+        return new Scenario(name, description, fileName, circuit, solver, units, plots, metricsFrom, metricsTo,
+                document);
     }
 
     private static Fluid readFluid(Fields f, Fields root, Problems problems) {
@@ -233,7 +246,7 @@ public final class ScenarioLoader {
     }
 
     private static Map<String, Element> readElements(Fields root, CircuitBuilder builder, Map<String, Node> nodes,
-                                                     Map<String, Located> ids, Problems problems) {
+                                                     Map<String, Located> ids, Fluid fluid, Problems problems) {
         Map<String, Element> elements = new LinkedHashMap<>();
         List<Located> list = root.list("elements");
         if (!root.has("elements") || list.isEmpty()) {
@@ -250,7 +263,7 @@ public final class ScenarioLoader {
             }
             Map<String, Node> ports = reader == null ? null : readPorts(f, reader.ports(), nodes);
             if (reader != null) {
-                Element e = reader.read(id, f, ports == null ? Map.of() : ports);
+                Element e = reader.read(id, f, ports == null ? Map.of() : ports, fluid);
                 if (e != null && idOk && ports != null) {
                     elements.put(id, e);
                     builder.add(e);
