@@ -27,11 +27,12 @@ public final class Circuit {
     private final Evaluation work;
     private final double[] impulses;
     private final Evaluation viewWork;
+    private final List<int[]> couplings;
 
     Circuit(String name, Fluid fluid, List<Node> nodes, List<Element> elements, List<StateSlot> states,
             double[] initialState, List<SignalHandle> signals, List<EnergyAccount> accounts,
             List<ScheduledInput> inputs, List<Discontinuity> discontinuities, EnergyAccount compressionAccount,
-            EnergyAccount[] tankAccounts) {
+            EnergyAccount[] tankAccounts, List<int[]> couplings) {
         this.name = name;
         this.fluid = fluid;
         this.nodes = nodes.toArray(new Node[0]);
@@ -47,6 +48,7 @@ public final class Circuit {
         this.work = new Evaluation(this.nodes.length);
         this.impulses = new double[this.accounts.size()];
         this.viewWork = new Evaluation(this.nodes.length);
+        this.couplings = List.copyOf(couplings);
     }
 
     /** @return the circuit's (scenario's) name */
@@ -57,6 +59,15 @@ public final class Circuit {
     /** @return the fluid */
     public Fluid fluid() {
         return fluid;
+    }
+
+    /**
+     * @return for each element, the solver indices of the states it reads or writes (its own states and the
+     *         pressures of its ports): states in one block may depend on each other, states in no common block
+     *         do not (the structure of the Jacobian)
+     */
+    public List<int[]> couplings() {
+        return couplings;
     }
 
     /** @return the number of states */

@@ -77,8 +77,15 @@ public final class CircuitBuilder {
         EnergyAccount compression = new EnergyAccount(accounts.size(), "fluid compression", EnergyAccount.Kind.STORED);
         accounts.add(compression);
 
+        List<int[]> blocks = new ArrayList<>();
         for (Element element : elements) {
             String prefix = element.id() + ".";
+            List<Integer> block = new ArrayList<>();
+            for (Node port : element.ports()) {
+                if (port.pressureSlot() != null) {
+                    block.add(port.pressureSlot().index());
+                }
+            }
             element.bind(new Binder() {
                 @Override
                 public Fluid fluid() {
@@ -90,6 +97,7 @@ public final class CircuitBuilder {
                     StateSlot s = new StateSlot(states.size(), prefix + relative, dimension, scale);
                     states.add(s);
                     initial.add(init);
+                    block.add(s.index());
                     return s;
                 }
 
@@ -117,9 +125,10 @@ public final class CircuitBuilder {
                     discontinuities.add(d);
                 }
             });
+            blocks.add(block.stream().mapToInt(Integer::intValue).distinct().toArray());
         }
         double[] y0 = initial.stream().mapToDouble(Double::doubleValue).toArray();
         return new Circuit(name, fluid, nodeList, elements, states, y0, signals, accounts, inputs,
-                discontinuities, compression, tankAccounts);
+                discontinuities, compression, tankAccounts, blocks);
     }
 }

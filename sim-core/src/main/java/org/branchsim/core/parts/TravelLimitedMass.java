@@ -29,6 +29,13 @@ public final class TravelLimitedMass {
      */
     public static final double RELEASE_FORCE = 1e-6;
 
+    /**
+     * Penetration, as a fraction of the travel, a free member may show before reaching a stop counts as an
+     * impact. It keeps round-off and the implicit method's tiny excursions right after a release (a member
+     * leaving its stop with almost no force) from being taken for impacts; the reset puts it back on the stop.
+     */
+    public static final double STOP_TOLERANCE = 1e-6;
+
     private final String owner;
     private final String name;
     private final double mass;
@@ -206,7 +213,8 @@ public final class TravelLimitedMass {
             Mode held = isLower ? Mode.AT_LOWER_STOP : Mode.AT_UPPER_STOP;
             Mode other = isLower ? Mode.AT_UPPER_STOP : Mode.AT_LOWER_STOP;
             if (mode == Mode.FREE) {
-                return isLower ? s.value(x) - lower : upper - s.value(x);
+                double slack = STOP_TOLERANCE * (upper - lower);
+                return isLower ? s.value(x) - lower + slack : upper - s.value(x) + slack;
             } else if (mode == held) {
                 double f = netForce.at(s);
                 return (isLower ? f : -f) - RELEASE_FORCE;

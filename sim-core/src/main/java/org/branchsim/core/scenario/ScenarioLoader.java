@@ -380,7 +380,7 @@ public final class ScenarioLoader {
         double minStep = f.positive("minStep", Dimension.TIME, SolverSettings.DEFAULT_MIN_STEP);
         double evTol = f.positive("eventTolerance", Dimension.TIME, SolverSettings.DEFAULT_EVENT_TOLERANCE);
         double maxEval = f.number("maxEvaluations", 1000, 1e10, SolverSettings.DEFAULT_MAX_EVALUATIONS);
-        String methodName = f.text("method", "explicit");
+        String methodName = f.text("method", SolverSettings.DEFAULT_METHOD.name().toLowerCase(Locale.ROOT));
         Method method = null;
         for (Method m : Method.values()) {
             if (m.name().toLowerCase(Locale.ROOT).equals(methodName)) {

@@ -1,5 +1,8 @@
 package org.branchsim.core.solve;
 
+import org.branchsim.core.model.Circuit;
+import org.branchsim.core.solve.stiff.RosenbrockIntegrator;
+import org.branchsim.core.solve.stiff.SparsityPattern;
 import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
 
 /** Creates the integrator a {@link Method} names and reads its work counters. */
@@ -8,8 +11,14 @@ final class IntegratorFactory {
     private IntegratorFactory() {
     }
 
-    static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol) {
+    /** Steps a Jacobian may serve before it is estimated again. */
+    static final int JACOBIAN_MAX_AGE = 20;
+
+    static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol, Circuit circuit) {
         switch (s.method()) {
+            case IMPLICIT:
+                return new RosenbrockIntegrator(s.minStep(), s.maxStep(), absTol, relTol,
+                        SparsityPattern.ofBlocks(circuit.dimension(), circuit.couplings()), JACOBIAN_MAX_AGE);
             case EXPLICIT:
             default:
                 return new CountingDormandPrince(s.minStep(), s.maxStep(), absTol, relTol);
@@ -18,6 +27,8 @@ final class IntegratorFactory {
 
     static String describe(Method m) {
         switch (m) {
+            case IMPLICIT:
+                return "implicit " + RosenbrockIntegrator.METHOD_NAME;
             case EXPLICIT:
             default:
                 return "explicit Dormand-Prince 5(4)";
@@ -28,14 +39,17 @@ final class IntegratorFactory {
         if (integrator instanceof CountingDormandPrince c) {
             return c.rejected();
         }
+        if (integrator instanceof RosenbrockIntegrator r) {
+            return r.rejectedSteps();
+        }
         return 0;
     }
 
     static long jacobians(AdaptiveStepsizeIntegrator integrator) {
-        return 0;
+        return integrator instanceof RosenbrockIntegrator r ? r.jacobianEvaluations() : 0;
     }
 
     static long factorisations(AdaptiveStepsizeIntegrator integrator) {
-        return 0;
+        return integrator instanceof RosenbrockIntegrator r ? r.luFactorisations() : 0;
     }
 }

@@ -3,5 +3,7 @@ package org.branchsim.core.solve;
 /** Integration methods a scenario can choose. */
 public enum Method {
     /** Adaptive Dormand-Prince 5(4), explicit; fine for non-stiff circuits. */
-    EXPLICIT
+    EXPLICIT,
+    /** Linearly implicit Rosenbrock method of order 3 (L-stable), for stiff circuits. */
+    IMPLICIT
 }

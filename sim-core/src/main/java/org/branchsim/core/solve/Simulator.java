@@ -65,7 +65,7 @@ public final class Simulator {
             absTol[i] = settings.relativeTolerance() * slots.get(i).absoluteScale();
             relTol[i] = settings.relativeTolerance();
         }
-        AdaptiveStepsizeIntegrator integrator = IntegratorFactory.create(settings, absTol, relTol);
+        AdaptiveStepsizeIntegrator integrator = IntegratorFactory.create(settings, absTol, relTol, circuit);
         integrator.setMaxEvaluations((int) Math.min(Integer.MAX_VALUE, settings.maxEvaluations()));
 
         AdaptableInterval maxCheck = AdaptableInterval.of(Math.min(settings.maxStep(), settings.outputInterval()));
