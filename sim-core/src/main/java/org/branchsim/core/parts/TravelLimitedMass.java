@@ -27,7 +27,7 @@ public final class TravelLimitedMass {
      * Net force, N, that must pull a held member off its stop. A force balanced to exactly zero (a piston
      * with no pressure and no load) keeps it held, and the switching function is never identically zero.
      */
-    public static final double RELEASE_FORCE = 1e-6;
+    public static final double RELEASE_FORCE = 1e-3;
 
     /**
      * Penetration, as a fraction of the travel, a free member may show before reaching a stop counts as an

@@ -4,6 +4,7 @@ import org.branchsim.core.model.Circuit;
 import org.branchsim.core.solve.stiff.RosenbrockIntegrator;
 import org.branchsim.core.solve.stiff.SparsityPattern;
 import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
+import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 
 /** Creates the integrator a {@link Method} names and reads its work counters. */
 final class IntegratorFactory {
@@ -12,13 +13,15 @@ final class IntegratorFactory {
     }
 
     /** Steps a Jacobian may serve before it is estimated again. */
-    static final int JACOBIAN_MAX_AGE = 20;
+    static final int JACOBIAN_MAX_AGE = 1;
 
     static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol, Circuit circuit) {
         switch (s.method()) {
             case IMPLICIT:
                 return new RosenbrockIntegrator(s.minStep(), s.maxStep(), absTol, relTol,
                         SparsityPattern.ofBlocks(circuit.dimension(), circuit.couplings()), JACOBIAN_MAX_AGE);
+            case REFERENCE:
+                return new DormandPrince853Integrator(s.minStep(), s.maxStep(), absTol, relTol);
             case EXPLICIT:
             default:
                 return new CountingDormandPrince(s.minStep(), s.maxStep(), absTol, relTol);
@@ -29,6 +32,8 @@ final class IntegratorFactory {
         switch (m) {
             case IMPLICIT:
                 return "implicit " + RosenbrockIntegrator.METHOD_NAME;
+            case REFERENCE:
+                return "explicit Dormand-Prince 8(5,3)";
             case EXPLICIT:
             default:
                 return "explicit Dormand-Prince 5(4)";
