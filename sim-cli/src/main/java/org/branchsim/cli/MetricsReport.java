@@ -139,6 +139,11 @@ public final class MetricsReport {
         return Double.parseDouble(String.format(java.util.Locale.ROOT, "%.7g", v));
     }
 
+    /** @return the shared JSON mapper (indented output) */
+    static ObjectMapper mapper() {
+        return MAPPER;
+    }
+
     /** @return the document as indented JSON text */
     public static String toJson(ObjectNode node) {
         try {

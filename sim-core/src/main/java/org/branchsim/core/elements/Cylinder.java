@@ -198,6 +198,11 @@ public final class Cylinder implements Element {
     }
 
     @Override
+    public List<TravelLimitedMass> members() {
+        return List.of(piston);
+    }
+
+    @Override
     public void initialiseModes(StateView state) {
         piston.initialise(state);
     }

@@ -172,6 +172,11 @@ public final class DirectReducingValve implements Element, ReducingValve {
     }
 
     @Override
+    public List<TravelLimitedMass> members() {
+        return List.of(spool);
+    }
+
+    @Override
     public void initialiseModes(StateView state) {
         spool.initialise(state);
     }

@@ -312,6 +312,11 @@ public final class PilotReducingValve implements Element, ReducingValve {
     }
 
     @Override
+    public List<TravelLimitedMass> members() {
+        return List.of(spool, poppet);
+    }
+
+    @Override
     public void initialiseModes(StateView state) {
         spool.initialise(state);
         poppet.initialise(state);

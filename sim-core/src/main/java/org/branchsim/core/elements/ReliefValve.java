@@ -98,6 +98,11 @@ public final class ReliefValve implements Element {
     }
 
     @Override
+    public List<TravelLimitedMass> members() {
+        return List.of(member);
+    }
+
+    @Override
     public void initialiseModes(StateView state) {
         member.initialise(state);
     }

@@ -104,6 +104,9 @@ public final class Fluid {
     }
 
     private static double softened(double pAbs) {
+        if (pAbs >= 40.0 * CAVITATION_SCALE) {
+            return 1.0; // exp(-40) is below double precision
+        }
         if (pAbs <= 0.0) {
             return 1e-4;
         }

@@ -24,6 +24,11 @@ public interface Element {
      */
     void evaluate(Evaluation evaluation);
 
+    /** @return the element's moving members (spools, poppets, pistons) that can be held at a stop */
+    default List<org.branchsim.core.parts.TravelLimitedMass> members() {
+        return List.of();
+    }
+
     /** Chooses the initial mode of members that start against a seat or stop. Default: nothing to do. */
     default void initialiseModes(StateView state) {
     }

@@ -1,0 +1,282 @@
+package org.branchsim.cli;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.results.EventRecord;
+import org.branchsim.core.results.SimulationResult;
+import org.branchsim.core.results.SolverStatistics;
+import org.branchsim.core.results.Trace;
+import org.branchsim.core.scenario.Scenario;
+import org.branchsim.core.scenario.ScenarioLoader;
+import org.branchsim.core.solve.Method;
+import org.branchsim.core.solve.Simulator;
+import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.study.StudyRunner;
+import org.branchsim.core.study.Variant;
+import org.branchsim.core.study.VariantOutcome;
+import org.branchsim.core.units.Dimension;
+import org.branchsim.core.units.Quantity;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code branchsim bench}: runs scenarios several times in one JVM after warm-up, per integration method,
+ * and writes wall times, work counters, accuracy against a tight reference and peak heap to bench.json and
+ * bench.csv; then times a parallel sweep of variants of the first scenario.
+ */
+@Command(name = "bench", mixinStandardHelpOptions = true,
+        description = "Measure run time, solver work, accuracy and memory per scenario and method; write bench.json and bench.csv.")
+public final class BenchCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "SCENARIO", arity = "0..*",
+            description = "Scenarios to measure (default: the demos in scenarios/).")
+    private List<Path> scenarios = new ArrayList<>();
+
+    @Option(names = "--runs", defaultValue = "5", description = "Timed runs per scenario and method (default ${DEFAULT-VALUE}).")
+    private int runs;
+
+    @Option(names = "--warmup", defaultValue = "2", description = "Untimed warm-up runs (default ${DEFAULT-VALUE}).")
+    private int warmup;
+
+    @Option(names = "--methods", defaultValue = "implicit,explicit", split = ",",
+            description = "Methods to compare (default ${DEFAULT-VALUE}).")
+    private List<String> methods;
+
+    @Option(names = "--end-time", paramLabel = "TIME", description = "Override every scenario's end time, e.g. \"10 s\".")
+    private String endTime;
+
+    @Option(names = "--no-reference", description = "Skip the accuracy check against Dormand-Prince 8(5,3) at rtol 1e-10.")
+    private boolean noReference;
+
+    @Option(names = "--sweep-variants", defaultValue = "64",
+            description = "Variants in the sweep benchmark of the first scenario, 0 to skip (default ${DEFAULT-VALUE}).")
+    private int sweepVariants;
+
+    @Option(names = "--sweep-parameter", defaultValue = "elements.prv.dampingOrifice.diameter",
+            description = "Parameter varied in the sweep benchmark (default ${DEFAULT-VALUE}).")
+    private String sweepParameter;
+
+    @Option(names = "--threads", description = "Threads for the sweep benchmark (default: all cores).")
+    private Integer threads;
+
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = "out/bench", description = "Output folder (default ${DEFAULT-VALUE}).")
+    private Path out;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        if (runs < 1 || warmup < 0 || sweepVariants < 0) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--runs must be at least 1, --warmup and --sweep-variants at least 0");
+        }
+        List<Path> files = scenarios.isEmpty() ? List.of(Path.of("scenarios", "fixture-clamp.json"),
+                Path.of("scenarios", "regulation-bench.json"), Path.of("scenarios", "feed-stall.json")) : scenarios;
+        List<Method> methodList = new ArrayList<>();
+        for (String m : methods) {
+            try {
+                methodList.add(Method.valueOf(m.trim().toUpperCase(Locale.ROOT)));
+            } catch (IllegalArgumentException e) {
+                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--methods: expected implicit, explicit or reference, found \"" + m + "\"");
+            }
+        }
+        Double end = endTime == null ? null : parseTime(endTime);
+        PrintWriter w = spec.commandLine().getOut();
+        ObjectNode root = MetricsReport.mapper().createObjectNode();
+        root.put("cores", Runtime.getRuntime().availableProcessors());
+        root.put("java", System.getProperty("java.version"));
+        root.put("runs", runs);
+        root.put("warmup", warmup);
+        ArrayNode results = root.putArray("results");
+        StringBuilder csv = new StringBuilder("scenario,method,simulated_s,median_wall_s,min_wall_s,max_wall_s,"
+                + "simulated_per_wall,accepted_steps,rejected_steps,evaluations,jacobians,lu_factorisations,events,"
+                + "max_pressure_error_rel_range,event_time_max_diff_s,peak_heap_MB\n");
+        w.printf("%-18s %-9s %9s %9s %9s %9s %8s %8s %10s %8s %8s %7s %10s %8s%n", "scenario", "method", "sim [s]",
+                "median[s]", "min [s]", "max [s]", "sim/wall", "steps", "rejected", "evals", "jacobian", "LU",
+                "err/range", "heap MB");
+        for (Path file : files) {
+            Scenario base = ScenarioLoader.load(file);
+            SolverSettings settings = end == null ? base.solver() : base.solver().withEndTime(end);
+            SimulationResult reference = noReference ? null
+                    : Simulator.run(ScenarioLoader.load(file).circuit(),
+                            settings.withMethod(Method.REFERENCE).withRelativeTolerance(1e-10));
+            for (Method m : methodList) {
+                SolverSettings s = settings.withMethod(m);
+                for (int i = 0; i < warmup; i++) {
+                    Simulator.run(ScenarioLoader.load(file).circuit(), s);
+                }
+                double[] walls = new double[runs];
+                SimulationResult last = null;
+                for (int i = 0; i < runs; i++) {
+                    Scenario sc = ScenarioLoader.load(file);
+                    long t0 = System.nanoTime();
+                    last = Simulator.run(sc.circuit(), s);
+                    walls[i] = (System.nanoTime() - t0) * 1e-9;
+                }
+                double heap = peakHeapMegabytes(file, s);
+                Arrays.sort(walls);
+                double median = walls[walls.length / 2];
+                SolverStatistics st = last.statistics();
+                double err = reference == null ? Double.NaN : maxPressureError(last.trace(), reference.trace());
+                double eventDiff = reference == null ? Double.NaN : eventTimeDifference(last.events(), reference.events());
+                ObjectNode o = results.addObject();
+                o.put("scenario", base.name());
+                o.put("method", st.method());
+                o.put("simulated_s", s.endTime());
+                o.put("relativeTolerance", s.relativeTolerance());
+                o.put("medianWall_s", median);
+                o.put("minWall_s", walls[0]);
+                o.put("maxWall_s", walls[walls.length - 1]);
+                o.put("simulatedPerWall", s.endTime() / median);
+                o.put("acceptedSteps", st.acceptedSteps());
+                o.put("rejectedSteps", st.rejectedSteps());
+                o.put("evaluations", st.evaluations());
+                o.put("jacobians", st.jacobians());
+                o.put("luFactorisations", st.factorisations());
+                o.put("events", st.totalEvents());
+                putNumber(o, "maxPressureErrorOverRange", err);
+                putNumber(o, "eventTimeMaxDifference_s", eventDiff);
+                o.put("peakHeap_MB", heap);
+                csv.append(String.format(Locale.ROOT, "%s,%s,%g,%.6f,%.6f,%.6f,%.1f,%d,%d,%d,%d,%d,%d,%s,%s,%.1f%n",
+                        base.name(), m.name().toLowerCase(Locale.ROOT), s.endTime(), median, walls[0],
+                        walls[walls.length - 1], s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),
+                        st.evaluations(), st.jacobians(), st.factorisations(), st.totalEvents(),
+                        Double.isNaN(err) ? "" : String.format(Locale.ROOT, "%.3g", err),
+                        Double.isNaN(eventDiff) ? "" : String.format(Locale.ROOT, "%.3g", eventDiff), heap));
+                w.printf(Locale.ROOT, "%-18s %-9s %9.3g %9.4f %9.4f %9.4f %8.1f %8d %8d %10d %8d %8d %7.2g %8.1f%n",
+                        base.name(), m.name().toLowerCase(Locale.ROOT), s.endTime(), median, walls[0],
+                        walls[walls.length - 1], s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),
+                        st.evaluations(), st.jacobians(), st.factorisations(), err, heap);
+                w.flush();
+            }
+        }
+        if (sweepVariants > 0) {
+            root.set("sweep", sweep(files.get(0), end, w));
+        }
+        OutputFolder folder = new OutputFolder(out);
+        folder.writeText("bench.json", MetricsReport.toJson(root));
+        folder.writeText("bench.csv", csv.toString());
+        w.printf("results written to %s (bench.json, bench.csv)%n", folder.dir());
+        return BranchsimMain.OK;
+    }
+
+    private ObjectNode sweep(Path file, Double end, PrintWriter w) {
+        Scenario base = ScenarioLoader.load(file);
+        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+        List<Variant> variants = new ArrayList<>();
+        Object current = org.branchsim.core.study.ParameterPath.parse(sweepParameter).find(base.document()) instanceof
+                org.branchsim.core.scenario.Located.Scalar sc ? sc.value() : null;
+        double si = current instanceof String text ? Quantity.si(text, Dimension.LENGTH) : 1e-3;
+        for (int i = 0; i < sweepVariants; i++) {
+            Map<String, Object> values = new LinkedHashMap<>();
+            double f = 0.8 + 0.4 * i / Math.max(1, sweepVariants - 1);
+            values.put(sweepParameter, String.format(Locale.ROOT, "%.6g mm", si * f * 1e3));
+            if (end != null) {
+                values.put("solver.endTime", String.format(Locale.ROOT, "%.6g s", end));
+            }
+            variants.add(new Variant(i, values));
+        }
+        long t0 = System.nanoTime();
+        List<VariantOutcome> outcomes = StudyRunner.run(file.toString(), base.document(), variants, n, d -> { });
+        double wall = (System.nanoTime() - t0) * 1e-9;
+        long failed = outcomes.stream().filter(o -> !o.ok()).count();
+        ObjectNode o = MetricsReport.mapper().createObjectNode();
+        o.put("scenario", base.name());
+        o.put("parameter", sweepParameter);
+        o.put("variants", sweepVariants);
+        o.put("threads", n);
+        o.put("wall_s", wall);
+        o.put("variantsPerSecond", sweepVariants / wall);
+        o.put("failed", failed);
+        w.printf(Locale.ROOT, "sweep: %d variants of %s (%s from 0.8x to 1.2x) on %d threads: %.2f s wall, %.1f variants/s, %d failed%n",
+                sweepVariants, base.name(), sweepParameter, n, wall, sweepVariants / wall, failed);
+        return o;
+    }
+
+    private static double parseTime(String text) {
+        Quantity.Parsed p = Quantity.parse(text, Dimension.TIME);
+        if (!p.ok() || p.si() <= 0) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--end-time: expected a positive time such as \"10 s\", found \"" + text + "\"");
+        }
+        return p.si();
+    }
+
+    private static void putNumber(ObjectNode o, String key, double v) {
+        if (Double.isFinite(v)) {
+            o.put(key, v);
+        } else {
+            o.putNull(key);
+        }
+    }
+
+    /** Peak heap during one run, MB: pools' peaks reset after a GC, read after the run (includes garbage). */
+    private static double peakHeapMegabytes(Path file, SolverSettings s) {
+        Scenario sc = ScenarioLoader.load(file);
+        System.gc();
+        List<MemoryPoolMXBean> pools = ManagementFactory.getMemoryPoolMXBeans();
+        for (MemoryPoolMXBean p : pools) {
+            p.resetPeakUsage();
+        }
+        Simulator.run(sc.circuit(), s);
+        long peak = 0;
+        for (MemoryPoolMXBean p : pools) {
+            if (p.getType() == MemoryType.HEAP) {
+                peak += p.getPeakUsage().getUsed();
+            }
+        }
+        return peak / 1048576.0;
+    }
+
+    static double maxPressureError(Trace a, Trace b) {
+        double worst = 0.0;
+        for (int i = 0; i < a.columns().size(); i++) {
+            if (a.columns().get(i).dimension() != Dimension.PRESSURE) {
+                continue;
+            }
+            double[] x = a.series(i);
+            double[] y = b.series(i);
+            double lo = Double.MAX_VALUE;
+            double hi = -Double.MAX_VALUE;
+            double e = 0.0;
+            for (int k = 0; k < Math.min(x.length, y.length); k++) {
+                lo = Math.min(lo, y[k]);
+                hi = Math.max(hi, y[k]);
+                e = Math.max(e, Math.abs(x[k] - y[k]));
+            }
+            if (hi > lo) {
+                worst = Math.max(worst, e / (hi - lo));
+            }
+        }
+        return worst;
+    }
+
+    static double eventTimeDifference(List<EventRecord> a, List<EventRecord> b) {
+        if (a.size() != b.size()) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double worst = 0.0;
+        for (int k = 0; k < a.size(); k++) {
+            if (!a.get(k).description().equals(b.get(k).description())) {
+                return Double.POSITIVE_INFINITY;
+            }
+            worst = Math.max(worst, Math.abs(a.get(k).time() - b.get(k).time()));
+        }
+        return worst;
+    }
+}

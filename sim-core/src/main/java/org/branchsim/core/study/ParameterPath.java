@@ -1,0 +1,114 @@
+package org.branchsim.core.study;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.scenario.Located;
+
+/**
+ * The address of one value in a scenario document, written with dots. List items of {@code nodes} and
+ * {@code elements} are picked by their id: {@code elements.prv.dampingOrifice.diameter},
+ * {@code nodes.clampLine.volume}, {@code fluid.bulkModulus}, {@code solver.relativeTolerance}.
+ */
+public final class ParameterPath {
+    private final String text;
+    private final List<String> segments;
+
+    private ParameterPath(String text, List<String> segments) {
+        this.text = text;
+        this.segments = segments;
+    }
+
+    /**
+     * @param text dotted path
+     * @return the path
+     * @throws BranchsimException BAD_ARGUMENT when the text is empty or has empty segments
+     */
+    public static ParameterPath parse(String text) {
+        String[] parts = text.split("\\.", -1);
+        List<String> segs = new ArrayList<>();
+        for (String p : parts) {
+            if (p.isBlank()) {
+                throw new BranchsimException(ErrorKey.BAD_ARGUMENT,
+                        "parameter path \"" + text + "\": expected names separated by single dots, e.g. "
+                                + "elements.prv.dampingOrifice.diameter");
+            }
+            segs.add(p.trim());
+        }
+        return new ParameterPath(text, List.copyOf(segs));
+    }
+
+    @Override
+    public String toString() {
+        return text;
+    }
+
+    /** @return the located value this path names in the document (it must already exist there) */
+    public Located find(Located root) {
+        return locate(root, false);
+    }
+
+    /**
+     * Replaces the value this path names with {@code value} (a unit-bearing string or a number). The field
+     * itself must already exist, so that a mistyped path is caught instead of adding an unknown field.
+     */
+    public void set(Located root, Object value) {
+        Located.Obj parent = (Located.Obj) locate(root, true);
+        String last = segments.get(segments.size() - 1);
+        Located old = parent.get(last);
+        parent.set(last, new Located.Scalar(value, old.line(), old.column()));
+    }
+
+    private Located locate(Located root, boolean parentOfLast) {
+        Located here = root;
+        int end = parentOfLast ? segments.size() - 1 : segments.size();
+        for (int i = 0; i < end; i++) {
+            String seg = segments.get(i);
+            here = step(here, seg, i);
+        }
+        if (parentOfLast) {
+            String last = segments.get(segments.size() - 1);
+            if (!(here instanceof Located.Obj o) || o.get(last) == null) {
+                throw missing(segments.size() - 1, here);
+            }
+        }
+        return here;
+    }
+
+    private Located step(Located here, String seg, int index) {
+        if (here instanceof Located.Obj o) {
+            Located next = o.get(seg);
+            if (next == null) {
+                throw missing(index, here);
+            }
+            return next;
+        }
+        if (here instanceof Located.Arr a) {
+            for (Located item : a.items()) {
+                if (item instanceof Located.Obj o && o.get("id") instanceof Located.Scalar s && seg.equals(s.value())) {
+                    return item;
+                }
+            }
+            throw missing(index, here);
+        }
+        throw missing(index, here);
+    }
+
+    private BranchsimException missing(int index, Located here) {
+        String known = "";
+        if (here instanceof Located.Obj o) {
+            known = " (there: " + String.join(", ", o.keys()) + ")";
+        } else if (here instanceof Located.Arr a) {
+            List<String> ids = new ArrayList<>();
+            for (Located item : a.items()) {
+                if (item instanceof Located.Obj o && o.get("id") instanceof Located.Scalar s) {
+                    ids.add(String.valueOf(s.value()));
+                }
+            }
+            known = " (ids there: " + String.join(", ", ids) + ")";
+        }
+        return new BranchsimException(ErrorKey.BAD_ARGUMENT, "parameter path \"" + text + "\": no \""
+                + segments.get(index) + "\" in the scenario" + known);
+    }
+}

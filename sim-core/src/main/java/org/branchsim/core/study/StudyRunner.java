@@ -1,0 +1,85 @@
+package org.branchsim.core.study;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.IntConsumer;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.results.SimulationResult;
+import org.branchsim.core.scenario.Located;
+import org.branchsim.core.scenario.Scenario;
+import org.branchsim.core.scenario.ScenarioLoader;
+import org.branchsim.core.solve.Simulator;
+
+/**
+ * Runs the variants of a study on a pool of threads. Each variant gets its own copy of the scenario
+ * document and its own circuit, so the runs share nothing; results come back in variant order, so the
+ * outcome does not depend on the number of threads. A variant that fails is reported with its error and
+ * does not stop the others.
+ */
+public final class StudyRunner {
+
+    private StudyRunner() {
+    }
+
+    /**
+     * @param fileName scenario file name (for messages)
+     * @param document the base document (not modified)
+     * @param variants the variants
+     * @param threads threads to use (at least 1)
+     * @param progress called with the number of variants done after each one (from worker threads)
+     * @return one outcome per variant, in variant order
+     */
+    public static List<VariantOutcome> run(String fileName, Located document, List<Variant> variants, int threads,
+                                           IntConsumer progress) {
+        ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, threads), r -> {
+            Thread t = new Thread(r, "branchsim-variant");
+            t.setDaemon(true);
+            return t;
+        });
+        AtomicInteger done = new AtomicInteger();
+        try {
+            List<Future<VariantOutcome>> futures = new ArrayList<>();
+            for (Variant v : variants) {
+                futures.add(pool.submit(() -> {
+                    VariantOutcome o = runOne(fileName, document, v);
+                    progress.accept(done.incrementAndGet());
+                    return o;
+                }));
+            }
+            List<VariantOutcome> out = new ArrayList<>();
+            for (Future<VariantOutcome> f : futures) {
+                out.add(f.get());
+            }
+            return out;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while running variants", e);
+        } catch (ExecutionException e) {
+            throw new IllegalStateException("a variant failed unexpectedly", e.getCause());
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    /** Builds and runs one variant; any expected failure becomes the outcome's error. */
+    public static VariantOutcome runOne(String fileName, Located document, Variant v) {
+        Scenario scenario = null;
+        try {
+            Located copy = document.copy();
+            for (Map.Entry<String, Object> e : v.values().entrySet()) {
+                ParameterPath.parse(e.getKey()).set(copy, e.getValue());
+            }
+            scenario = ScenarioLoader.build(fileName, copy);
+            SimulationResult r = Simulator.run(scenario.circuit(), scenario.solver());
+            return new VariantOutcome(v, scenario, r, null);
+        } catch (BranchsimException e) {
+            return new VariantOutcome(v, scenario, null, e.fullReport().replace(System.lineSeparator(), " | "));
+        }
+    }
+}
