@@ -6,6 +6,8 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
+import org.branchsim.core.analysis.OscillationFinding;
+import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import java.util.Map;
 import org.branchsim.core.analysis.SignalStatistics;
@@ -51,6 +53,10 @@ public final class MetricsReport {
         }
         root.set("reducingValves", reducingValves(ReducingValveMetrics.of(result, scenario.metricsFrom(),
                 scenario.metricsTo()), units, scenario.metricsFrom(), scenario.metricsTo()));
+        ArrayNode osc = root.putArray("oscillations");
+        for (OscillationFinding f : OscillationScan.scan(result)) {
+            osc.add(finding(f, units));
+        }
         root.set("energy", energy(result.energy(), units));
         root.set("solver", solver(result.statistics()));
         return root;
@@ -86,6 +92,28 @@ public final class MetricsReport {
             o.put("steadyMeteringPower", round(w.fromSi(m.meteringPower())));
         }
         return arr;
+    }
+
+    static ObjectNode finding(OscillationFinding f, UnitSystem units) {
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("kind", f.kind().label());
+        o.put("frequency_Hz", round(f.frequency()));
+        o.put("trend", f.trend().label());
+        o.put("growthRate_1_per_s", round(f.growthRate()));
+        Dimension d = f.dominant().signal().endsWith(".x") ? Dimension.LENGTH : Dimension.PRESSURE;
+        Unit u = units.displayUnit(d);
+        o.put("dominantSignal", f.dominant().signal());
+        o.put("amplitudeUnit", u.symbol());
+        o.put("amplitudeAtEnd", round(u.fromSi(f.dominant().endAmplitude()) - u.fromSi(0.0)));
+        ArrayNode parts = o.putArray("parts");
+        f.elements().forEach(parts::add);
+        ArrayNode sig = o.putArray("signals");
+        f.signals().forEach(s -> sig.add(s.signal()));
+        if (f.impactingMember() != null) {
+            o.put("impactingMember", f.impactingMember());
+            o.put("impactsPerSecond", round(f.impactsPerSecond()));
+        }
+        return o;
     }
 
     private static void putNumber(ObjectNode o, String key, double v) {

@@ -4,6 +4,9 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import java.util.List;
+import org.branchsim.core.analysis.OscillationFinding;
+import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.analysis.SignalStatistics;
 import org.branchsim.core.results.SimulationResult;
@@ -86,6 +89,14 @@ public final class RunCommand implements Callable<Integer> {
                             : String.format(Locale.ROOT, "settles in +-2 %% band in %.3f s (at %.3f s)", m.settlingTime(), m.settledAt()),
                     qu.fromSi(m.drainFlow()), qu.symbol(), wu.fromSi(m.drainPower()), wu.symbol(),
                     wu.fromSi(m.meteringPower()), wu.symbol()));
+        }
+        List<OscillationFinding> osc = OscillationScan.scan(r);
+        if (osc.isEmpty()) {
+            sb.append("oscillation: none sustained after the transients").append(nl);
+        }
+        for (OscillationFinding f : osc) {
+            sb.append("oscillation: ").append(DiagnoseCommand.describe(f, s.units()))
+                    .append(" (try 'branchsim diagnose')").append(nl);
         }
         Unit eu = s.units().displayUnit(Dimension.ENERGY);
         sb.append(String.format(Locale.ROOT, "energy: %.4g %s supplied, residual %.3g %% of supplied%n",

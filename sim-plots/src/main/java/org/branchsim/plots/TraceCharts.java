@@ -15,6 +15,7 @@ import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
+import org.jfree.chart.plot.SeriesRenderingOrder;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.TextTitle;
@@ -149,6 +150,59 @@ public final class TraceCharts {
         note.setPaint(new Color(0x555555));
         chart.addSubtitle(note);
         ChartUtils.saveChartAsPNG(file.toFile(), chart, WIDTH, height);
+    }
+
+    /** A trace with the label it carries in a comparison. @param label legend label @param trace the trace */
+    public record Labelled(String label, Trace trace) {
+    }
+
+    /**
+     * Draws one signal from several runs on one axis (sweep overlays, before/after comparisons).
+     *
+     * @param runs labelled traces (at least one; every one must have the signal)
+     * @param signal signal name
+     * @param title figure title
+     * @param units unit system for the axis
+     * @param file PNG to write
+     * @throws IOException when the file cannot be written
+     */
+    public static void compare(List<Labelled> runs, String signal, String title, UnitSystem units, Path file)
+            throws IOException {
+        if (runs.isEmpty()) {
+            throw new IllegalArgumentException("no runs to compare");
+        }
+        XYSeriesCollection data = new XYSeriesCollection();
+        Dimension d = null;
+        for (Labelled r : runs) {
+            int i = r.trace().indexOf(signal);
+            if (i < 0) {
+                throw new IllegalArgumentException("run " + r.label() + " has no signal " + signal);
+            }
+            d = r.trace().columns().get(i).dimension();
+            Unit u = units.displayUnit(d);
+            XYSeries series = new XYSeries(r.label(), false, true);
+            double[] t = r.trace().times();
+            double[] v = r.trace().series(i);
+            for (int k = 0; k < v.length; k++) {
+                series.add(t[k], u.fromSi(v[k]), false);
+            }
+            data.addSeries(series);
+        }
+        NumberAxis y = new NumberAxis(axisLabel(signal, d, units));
+        y.setAutoRangeIncludesZero(false);
+        y.setAutoRangeMinimumSize(1e-9);
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        for (int k = 0; k < runs.size(); k++) {
+            renderer.setSeriesPaint(k, PALETTE[k % PALETTE.length]);
+            renderer.setSeriesStroke(k, new BasicStroke(1.4f));
+        }
+        XYPlot plot = new XYPlot(data, timeAxis(), y, renderer);
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setDomainGridlinePaint(new Color(0xd0d0d0));
+        plot.setRangeGridlinePaint(new Color(0xd0d0d0));
+        plot.setSeriesRenderingOrder(SeriesRenderingOrder.FORWARD);
+        JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, runs.size() <= 16);
+        save(chart, file, PANEL_HEIGHT + 160);
     }
 
     /** @return the names of a trace's signals of one dimension, in trace order */

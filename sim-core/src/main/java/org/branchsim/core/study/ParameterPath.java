@@ -60,6 +60,40 @@ public final class ParameterPath {
         parent.set(last, new Located.Scalar(value, old.line(), old.column()));
     }
 
+    /**
+     * Sets the value, adding the field when its parent object exists but the field does not (an optional
+     * field left at its default). The scenario reader still checks that the field is one it knows.
+     */
+    public void setOrAdd(Located root, Object value) {
+        Located parent = segments.size() == 1 ? root : locateParentAllowingMissingLeaf(root);
+        if (!(parent instanceof Located.Obj o)) {
+            throw missing(segments.size() - 1, parent);
+        }
+        String last = segments.get(segments.size() - 1);
+        Located old = o.get(last);
+        int line = old == null ? o.line() : old.line();
+        int col = old == null ? o.column() : old.column();
+        o.set(last, new Located.Scalar(value, line, col));
+    }
+
+    /** @return true when the document has a value at this path */
+    public boolean exists(Located root) {
+        try {
+            find(root);
+            return true;
+        } catch (BranchsimException e) {
+            return false;
+        }
+    }
+
+    private Located locateParentAllowingMissingLeaf(Located root) {
+        Located here = root;
+        for (int i = 0; i < segments.size() - 1; i++) {
+            here = step(here, segments.get(i), i);
+        }
+        return here;
+    }
+
     private Located locate(Located root, boolean parentOfLast) {
         Located here = root;
         int end = parentOfLast ? segments.size() - 1 : segments.size();

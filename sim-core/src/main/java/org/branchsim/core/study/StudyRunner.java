@@ -73,7 +73,7 @@ public final class StudyRunner {
         try {
             Located copy = document.copy();
             for (Map.Entry<String, Object> e : v.values().entrySet()) {
-                ParameterPath.parse(e.getKey()).set(copy, e.getValue());
+                ParameterPath.parse(e.getKey()).setOrAdd(copy, e.getValue());
             }
             scenario = ScenarioLoader.build(fileName, copy);
             SimulationResult r = Simulator.run(scenario.circuit(), scenario.solver());

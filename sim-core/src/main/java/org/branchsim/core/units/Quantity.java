@@ -6,7 +6,8 @@ import java.util.regex.Pattern;
 
 /**
  * Parses dimensioned values written as text, such as {@code "210 bar"}, {@code "12 L/min"} or
- * {@code "0.8 mm"}, into SI. A dimensioned value without a unit is an error, never silently SI.
+ * {@code "0.8 mm"}, into SI. A dimensioned value without a unit is an error, never silently SI. A value
+ * written with a {@link Tolerance} reads as its nominal value.
  */
 public final class Quantity {
 
@@ -30,6 +31,24 @@ public final class Quantity {
      * @return the parsed SI value, or an explanation of what is wrong
      */
     public static Parsed parse(String text, Dimension expected) {
+        Tolerance tol;
+        try {
+            tol = Tolerance.parse(text);
+        } catch (IllegalArgumentException e) {
+            return new Parsed(Double.NaN, null, "a value with a tolerance such as \"0.8 mm ± 0.02 mm\", "
+                    + "\"15 N/mm ± 10 %\" or \"1.2 GPa .. 1.6 GPa\" (" + e.getMessage() + ")");
+        }
+        if (tol != null) {
+            Parsed lo = parseNominal(tol.low() + " " + tol.unit(), expected);
+            if (!lo.ok()) {
+                return lo;
+            }
+            return parseNominal(tol.nominal(), expected);
+        }
+        return parseNominal(text, expected);
+    }
+
+    private static Parsed parseNominal(String text, Dimension expected) {
         Matcher m = VALUE_AND_UNIT.matcher(text);
         if (!m.matches()) {
             return new Parsed(Double.NaN, null, "a number followed by a " + expected.humanName() + " unit ("

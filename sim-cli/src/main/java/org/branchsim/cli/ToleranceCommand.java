@@ -1,0 +1,129 @@
+package org.branchsim.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.scenario.Scenario;
+import org.branchsim.core.study.StudyRunner;
+import org.branchsim.core.study.ToleranceStudy;
+import org.branchsim.core.study.ValueText;
+import org.branchsim.core.study.Variant;
+import org.branchsim.core.study.VariantOutcome;
+import org.branchsim.plots.HistogramChart;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/**
+ * {@code branchsim tolerance SCENARIO --runs N --seed S}: Monte Carlo over the values the scenario writes
+ * with a tolerance; reports mean, P5, P95 and extremes of every metric and a histogram of one.
+ */
+@Command(name = "tolerance", mixinStandardHelpOptions = true,
+        description = "Monte Carlo over the values the scenario writes with a tolerance (\"0.8 mm ± 0.02 mm\", "
+                + "\"15 N/mm ± 10 %\", \"1.2 GPa .. 1.6 GPa\"); report mean, P5, P95 and worst cases of every metric.")
+public final class ToleranceCommand implements Callable<Integer> {
+
+    @Mixin
+    private ScenarioArgument scenario;
+
+    @Option(names = "--runs", defaultValue = "100", description = "Number of runs (default ${DEFAULT-VALUE}).")
+    private int runs;
+
+    @Option(names = "--seed", defaultValue = "1", description = "Random seed (default ${DEFAULT-VALUE}); same seed, same numbers.")
+    private long seed;
+
+    @Option(names = "--threads", description = "Threads (default: all cores).")
+    private Integer threads;
+
+    @Option(names = "--histogram", paramLabel = "METRIC",
+            description = "Metric to draw as a histogram (default: the first overshoot, else the first metric).")
+    private String histogram;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/<scenario name>-tolerance).")
+    private Path out;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        if (runs < 2) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--runs: expected at least 2, found " + runs);
+        }
+        Scenario base = scenario.load();
+        List<ToleranceStudy.Parameter> params = ToleranceStudy.parameters(base.document());
+        if (params.isEmpty()) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, base.file() + ": no value is written with a tolerance; "
+                    + "write e.g. \"diameter\": \"0.8 mm ± 0.02 mm\", \"springRate\": \"15 N/mm ± 10 %\" or "
+                    + "\"bulkModulus\": \"1.2 GPa .. 1.6 GPa\"");
+        }
+        List<Variant> variants = ToleranceStudy.draw(params, runs, seed);
+        int n = threads == null ? Runtime.getRuntime().availableProcessors() : Math.max(1, threads);
+        PrintWriter err = spec.commandLine().getErr();
+        long start = System.nanoTime();
+        List<VariantOutcome> outcomes = StudyRunner.run(base.file(), base.document(), variants, n,
+                d -> SweepCommand.progress(err, d, runs, start));
+        err.println();
+        List<Map<String, Double>> rows = new ArrayList<>();
+        for (VariantOutcome o : outcomes) {
+            rows.add(o.ok() ? StudyTable.metrics(o, base.units()) : Map.of());
+        }
+        List<String> cols = StudyTable.columns(rows);
+        List<ToleranceStudy.Statistics> stats = new ArrayList<>();
+        for (String c : cols) {
+            stats.add(ToleranceStudy.statistics(c, rows.stream().mapToDouble(r -> r.getOrDefault(c, Double.NaN)).toArray()));
+        }
+        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-tolerance"));
+        java.util.Map<String, List<Object>> axes = new java.util.LinkedHashMap<>();
+        params.forEach(p -> axes.put(p.path(), List.of()));
+        folder.writeText("runs.csv", SweepCommand.csv(axes, outcomes, rows, cols));
+        StringBuilder sum = new StringBuilder("metric,runs,mean,p5,p95,min,max\n");
+        for (ToleranceStudy.Statistics s : stats) {
+            sum.append(StudyTable.field(s.metric())).append(',').append(s.count()).append(',')
+                    .append(StudyTable.field(s.mean())).append(',').append(StudyTable.field(s.p5())).append(',')
+                    .append(StudyTable.field(s.p95())).append(',').append(StudyTable.field(s.min())).append(',')
+                    .append(StudyTable.field(s.max())).append('\n');
+        }
+        folder.writeText("statistics.csv", sum.toString());
+        String metric = histogram != null ? histogram : cols.stream().filter(c -> c.contains("overshoot")).findFirst()
+                .orElse(cols.isEmpty() ? null : cols.get(0));
+        if (metric != null) {
+            if (!cols.contains(metric)) {
+                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--histogram: expected one of " + String.join(", ", cols)
+                        + ", found \"" + metric + "\"");
+            }
+            double[] values = rows.stream().mapToDouble(r -> r.getOrDefault(metric, Double.NaN))
+                    .filter(Double::isFinite).toArray();
+            if (values.length > 0) {
+                folder.write("histogram-" + FigureSet.slug(metric) + ".png", p -> HistogramChart.save(values,
+                        Math.max(5, (int) Math.ceil(Math.sqrt(values.length))),
+                        base.name() + ": " + metric + " over " + values.length + " runs", metric, p));
+            }
+        }
+        PrintWriter w = spec.commandLine().getOut();
+        w.printf("%s: %d runs, seed %d, %d failed; toleranced values:%n", base.name(), runs, seed,
+                outcomes.stream().filter(o -> !o.ok()).count());
+        for (ToleranceStudy.Parameter p : params) {
+            w.printf(Locale.ROOT, "  %s: %s, drawn uniformly from %s to %s %s%n", p.path(), p.tolerance().nominal(),
+                    ValueText.format(p.tolerance().low()), ValueText.format(p.tolerance().high()), p.tolerance().unit());
+        }
+        w.printf("%-44s %10s %10s %10s %10s %10s%n", "metric", "mean", "P5", "P95", "min", "max");
+        for (ToleranceStudy.Statistics s : stats) {
+            w.printf(Locale.ROOT, "%-44s %10.4g %10.4g %10.4g %10.4g %10.4g%n", s.metric(), s.mean(), s.p5(), s.p95(),
+                    s.min(), s.max());
+        }
+        w.printf("outputs written to %s:%n", folder.dir());
+        for (Path p : folder.written()) {
+            w.printf("  %s%n", p.getFileName());
+        }
+        w.println("Caution: " + Cautions.SHORT);
+        return BranchsimMain.OK;
+    }
+}

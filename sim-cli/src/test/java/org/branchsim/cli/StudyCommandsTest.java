@@ -1,0 +1,81 @@
+package org.branchsim.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** sweep, tolerance and modes through the command line. */
+class StudyCommandsTest {
+
+    private static final String FEED = RunCommandTest.SCENARIOS.resolve("feed-stall.json").toString();
+
+    @Test
+    void sweepGivesIdenticalSummaryOnOneAndTwoThreads(@TempDir Path dir) throws IOException {
+        String[] common = {"sweep", FEED, "--vary", "elements.relief.damping=30 N*s/m,60 N*s/m,120 N*s/m",
+            "--vary", "nodes.pumpLine.volume=0.2 L..0.4 L:2", "--rank-by", "pumpLine.p.peak [bar]"};
+        RunCommandTest.Outcome one = RunCommandTest.run(concat(common, "--threads", "1", "--out", dir.resolve("one").toString()));
+        RunCommandTest.Outcome two = RunCommandTest.run(concat(common, "--threads", "2", "--out", dir.resolve("two").toString()));
+        assertEquals(0, one.code(), one.err());
+        assertEquals(0, two.code(), two.err());
+        String a = Files.readString(dir.resolve("one/summary.csv"));
+        String b = Files.readString(dir.resolve("two/summary.csv"));
+        assertEquals(a, b);
+        List<String> lines = a.lines().toList();
+        assertEquals(1 + 6, lines.size(), "header plus 3 x 2 variants");
+        assertTrue(lines.get(0).startsWith("variant,elements.relief.damping,nodes.pumpLine.volume,status,error,"));
+        assertTrue(lines.get(1).contains("30 N*s/m,0.2 L,ok"), lines.get(1));
+        assertTrue(one.out().contains("6 variants, ranked by pumpLine.p.peak [bar]"), one.out());
+        assertTrue(one.err().contains("variants 6/6 done"), one.err());
+        assertTrue(ImageIO.read(dir.resolve("one").resolve("overlay-pumpline-p.png").toFile()) != null);
+    }
+
+    @Test
+    void sweepRejectsAnUnknownPath() {
+        RunCommandTest.Outcome o = RunCommandTest.run("sweep", FEED, "--vary", "elements.relief.dampng=1 N*s/m");
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("no \"dampng\""), o.err());
+    }
+
+    @Test
+    void toleranceStudyIsRepeatableWithTheSameSeed(@TempDir Path dir) throws IOException {
+        Path scenario = dir.resolve("toleranced.json");
+        Files.writeString(scenario, Files.readString(Path.of(FEED))
+                .replace("\"springRate\": \"60 N/mm\"", "\"springRate\": \"60 N/mm ± 10 %\"")
+                .replace("\"bulkModulus\": \"1.5 GPa\"", "\"bulkModulus\": \"1.3 GPa .. 1.7 GPa\""));
+        String[] args = {"tolerance", scenario.toString(), "--runs", "4", "--seed", "42", "--threads", "2"};
+        RunCommandTest.Outcome a = RunCommandTest.run(concat(args, "--out", dir.resolve("a").toString()));
+        RunCommandTest.Outcome b = RunCommandTest.run(concat(args, "--out", dir.resolve("b").toString()));
+        assertEquals(0, a.code(), a.err());
+        assertEquals(Files.readString(dir.resolve("a/statistics.csv")), Files.readString(dir.resolve("b/statistics.csv")));
+        assertTrue(a.out().contains("elements.relief.springRate: 60 N/mm, drawn uniformly from 54 to 66 N/mm"), a.out());
+        assertTrue(a.out().contains("fluid.bulkModulus: 1.5 GPa"), a.out());
+        assertTrue(Files.readString(dir.resolve("a/statistics.csv")).startsWith("metric,runs,mean,p5,p95,min,max"));
+        try (var files = Files.list(dir.resolve("a"))) {
+            assertTrue(files.anyMatch(p -> p.getFileName().toString().startsWith("histogram-")));
+        }
+    }
+
+    @Test
+    void modesListsAndFlagsModes(@TempDir Path dir) {
+        RunCommandTest.Outcome o = RunCommandTest.run("modes", FEED, "--at", "0.8 s", "--out", dir.toString());
+        assertEquals(0, o.code(), o.err());
+        assertTrue(o.out().contains("linearised at t = 0.8 s"), o.out());
+        assertTrue(o.out().contains("feed"), o.out());
+        assertTrue(Files.exists(dir.resolve("modes.csv")));
+        assertEquals(2, RunCommandTest.run("modes", FEED, "--at", "soon").code());
+    }
+
+    private static String[] concat(String[] a, String... b) {
+        String[] out = new String[a.length + b.length];
+        System.arraycopy(a, 0, out, 0, a.length);
+        System.arraycopy(b, 0, out, a.length, b.length);
+        return out;
+    }
+}
