@@ -192,7 +192,18 @@ public final class SweepCommand implements Callable<Integer> {
     static void progress(PrintWriter err, int done, int total, long start) {
         double elapsed = (System.nanoTime() - start) * 1e-9;
         double left = done == 0 ? Double.NaN : elapsed / done * (total - done);
+        boolean console = System.console() != null;
+        int step = Math.max(1, total / 10);
+        if (!console && total > 0 && done % step != 0 && done != total) {
+            return; // a log file gets a line every tenth of the work, a terminal a live line
+        }
         synchronized (err) {
+            if (!console) {
+                err.printf(Locale.ROOT, total > 0 ? "variants %d/%d done, about %.0f s left%n" : "variants %d done%n",
+                        done, total, left);
+                err.flush();
+                return;
+            }
             if (total > 0) {
                 err.printf(Locale.ROOT, "\rvariants %d/%d done, about %.0f s left   ", done, total, left);
             } else {

@@ -19,7 +19,7 @@ import org.hipparchus.linear.RealMatrix;
  * held at a seat or stop kept held (their position and velocity are left out), scaled by each state's typical
  * magnitude, then its eigenvalues and eigenvectors. For each mode it reports natural frequency, damping ratio
  * and participation factors p_ik = |r_ik l_ki| (right and left eigenvectors; Perez-Arriaga, Verghese and
- * Schweppe, IEEE Trans. PAS-101(9), 1982), normalised to sum to one, summed per element.
+ * Schweppe, IEEE Trans. PAS-101(9), 1982; citation from memory), normalised to sum to one, summed per element.
  */
 public final class ModeAnalysis {
 
