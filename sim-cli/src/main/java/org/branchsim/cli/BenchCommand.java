@@ -14,12 +14,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.branchsim.core.analysis.TraceComparison;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
-import org.branchsim.core.results.EventRecord;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.SolverStatistics;
-import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.scenario.ScenarioLoader;
 import org.branchsim.core.solve.Method;
@@ -48,13 +47,13 @@ public final class BenchCommand implements Callable<Integer> {
             description = "Scenarios to measure (default: the demos in scenarios/).")
     private List<Path> scenarios = new ArrayList<>();
 
-    @Option(names = "--runs", defaultValue = "5", description = "Timed runs per scenario and method (default ${DEFAULT-VALUE}).")
+    @Option(names = "--runs", paramLabel = "N", defaultValue = "5", description = "Timed runs per scenario and method (default ${DEFAULT-VALUE}).")
     private int runs;
 
-    @Option(names = "--warmup", defaultValue = "2", description = "Untimed warm-up runs (default ${DEFAULT-VALUE}).")
+    @Option(names = "--warmup", paramLabel = "N", defaultValue = "2", description = "Untimed warm-up runs (default ${DEFAULT-VALUE}).")
     private int warmup;
 
-    @Option(names = "--methods", defaultValue = "implicit,explicit", split = ",",
+    @Option(names = "--methods", paramLabel = "METHOD", defaultValue = "implicit,explicit", split = ",",
             description = "Methods to compare (default ${DEFAULT-VALUE}).")
     private List<String> methods;
 
@@ -64,15 +63,15 @@ public final class BenchCommand implements Callable<Integer> {
     @Option(names = "--no-reference", description = "Skip the accuracy check against Dormand-Prince 8(5,3) at rtol 1e-10.")
     private boolean noReference;
 
-    @Option(names = "--sweep-variants", defaultValue = "64",
+    @Option(names = "--sweep-variants", paramLabel = "N", defaultValue = "64",
             description = "Variants in the sweep benchmark of the first scenario, 0 to skip (default ${DEFAULT-VALUE}).")
     private int sweepVariants;
 
-    @Option(names = "--sweep-parameter", defaultValue = "elements.prv.dampingOrifice.diameter",
+    @Option(names = "--sweep-parameter", paramLabel = "PATH", defaultValue = "elements.prv.dampingOrifice.diameter",
             description = "Parameter varied in the sweep benchmark (default ${DEFAULT-VALUE}).")
     private String sweepParameter;
 
-    @Option(names = "--threads", description = "Threads for the sweep benchmark (default: all cores).")
+    @Option(names = "--threads", paramLabel = "N", description = "Threads for the sweep benchmark (default: all cores).")
     private Integer threads;
 
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "out/bench", description = "Output folder (default ${DEFAULT-VALUE}).")
@@ -139,8 +138,10 @@ public final class BenchCommand implements Callable<Integer> {
                 Arrays.sort(walls);
                 double median = walls[walls.length / 2];
                 SolverStatistics st = last.statistics();
-                double err = reference == null ? Double.NaN : maxPressureError(last.trace(), reference.trace());
-                double eventDiff = reference == null ? Double.NaN : eventTimeDifference(last.events(), reference.events());
+                double err = reference == null ? Double.NaN
+                        : TraceComparison.maxErrorOverRange(last.trace(), reference.trace(), Dimension.PRESSURE);
+                double eventDiff = reference == null ? Double.NaN
+                        : TraceComparison.eventTimeDifference(last.events(), reference.events());
                 ObjectNode o = results.addObject();
                 o.put("scenario", base.name());
                 o.put("method", st.method());
@@ -247,42 +248,5 @@ public final class BenchCommand implements Callable<Integer> {
             }
         }
         return peak / 1048576.0;
-    }
-
-    static double maxPressureError(Trace a, Trace b) {
-        double worst = 0.0;
-        for (int i = 0; i < a.columns().size(); i++) {
-            if (a.columns().get(i).dimension() != Dimension.PRESSURE) {
-                continue;
-            }
-            double[] x = a.series(i);
-            double[] y = b.series(i);
-            double lo = Double.MAX_VALUE;
-            double hi = -Double.MAX_VALUE;
-            double e = 0.0;
-            for (int k = 0; k < Math.min(x.length, y.length); k++) {
-                lo = Math.min(lo, y[k]);
-                hi = Math.max(hi, y[k]);
-                e = Math.max(e, Math.abs(x[k] - y[k]));
-            }
-            if (hi > lo) {
-                worst = Math.max(worst, e / (hi - lo));
-            }
-        }
-        return worst;
-    }
-
-    static double eventTimeDifference(List<EventRecord> a, List<EventRecord> b) {
-        if (a.size() != b.size()) {
-            return Double.POSITIVE_INFINITY;
-        }
-        double worst = 0.0;
-        for (int k = 0; k < a.size(); k++) {
-            if (!a.get(k).description().equals(b.get(k).description())) {
-                return Double.POSITIVE_INFINITY;
-            }
-            worst = Math.max(worst, Math.abs(a.get(k).time() - b.get(k).time()));
-        }
-        return worst;
     }
 }

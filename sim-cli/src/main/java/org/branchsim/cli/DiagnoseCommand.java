@@ -32,7 +32,7 @@ public final class DiagnoseCommand implements Callable<Integer> {
     @Mixin
     private ScenarioArgument scenario;
 
-    @Option(names = "--threads", description = "Threads for the remedy runs (default: all cores).")
+    @Option(names = "--threads", paramLabel = "N", description = "Threads for the remedy runs (default: all cores).")
     private Integer threads;
 
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/<scenario name>-diagnosis).")
@@ -71,10 +71,7 @@ public final class DiagnoseCommand implements Callable<Integer> {
         }
         PrintWriter w = spec.commandLine().getOut();
         w.print(text);
-        w.printf("outputs written to %s:%n", folder.dir());
-        for (Path p : folder.written()) {
-            w.printf("  %s%n", p.getFileName());
-        }
+        folder.report(w);
         return BranchsimMain.OK;
     }
 

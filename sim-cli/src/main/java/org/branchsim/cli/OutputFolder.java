@@ -42,6 +42,14 @@ public final class OutputFolder {
         return List.copyOf(written);
     }
 
+    /** Prints "outputs written to DIR:" and one line per file written. */
+    public void report(java.io.PrintWriter w) {
+        w.printf("outputs written to %s:%n", dir);
+        for (Path p : written) {
+            w.printf("  %s%n", p.getFileName());
+        }
+    }
+
     /** Writes a text file. */
     public Path writeText(String name, String text) {
         return write(name, p -> Files.writeString(p, text, StandardCharsets.UTF_8));

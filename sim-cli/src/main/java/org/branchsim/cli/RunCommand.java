@@ -49,10 +49,7 @@ public final class RunCommand implements Callable<Integer> {
         folder.writeText("summary.txt", summary);
         PrintWriter w = spec.commandLine().getOut();
         w.print(summary);
-        w.printf("outputs written to %s:%n", folder.dir());
-        for (Path p : folder.written()) {
-            w.printf("  %s%n", p.getFileName());
-        }
+        folder.report(w);
         return BranchsimMain.OK;
     }
 

@@ -44,7 +44,7 @@ public final class SweepCommand implements Callable<Integer> {
                     + "(from..to:count). PATH as elements.prv.dampingOrifice.diameter. Repeat for a grid.")
     private List<String> vary;
 
-    @Option(names = "--threads", description = "Threads (default: all cores).")
+    @Option(names = "--threads", paramLabel = "N", description = "Threads (default: all cores).")
     private Integer threads;
 
     @Option(names = "--rank-by", paramLabel = "METRIC", description = "summary.csv column to rank by (default: the "
@@ -100,10 +100,7 @@ public final class SweepCommand implements Callable<Integer> {
         }
         printRanked(axes, outcomes, rows, metric);
         PrintWriter w = spec.commandLine().getOut();
-        w.printf("outputs written to %s:%n", folder.dir());
-        for (Path p : folder.written()) {
-            w.printf("  %s%n", p.getFileName());
-        }
+        folder.report(w);
         w.println("Caution: " + Cautions.SHORT);
         return BranchsimMain.OK;
     }

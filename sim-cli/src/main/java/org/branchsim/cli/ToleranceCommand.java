@@ -27,19 +27,19 @@ import picocli.CommandLine.Option;
  */
 @Command(name = "tolerance", mixinStandardHelpOptions = true,
         description = "Monte Carlo over the values the scenario writes with a tolerance (\"0.8 mm ± 0.02 mm\", "
-                + "\"15 N/mm ± 10 %\", \"1.2 GPa .. 1.6 GPa\"); report mean, P5, P95 and worst cases of every metric.")
+                + "\"15 N/mm ± 10 %%\", \"1.2 GPa .. 1.6 GPa\"); report mean, P5, P95 and worst cases of every metric.")
 public final class ToleranceCommand implements Callable<Integer> {
 
     @Mixin
     private ScenarioArgument scenario;
 
-    @Option(names = "--runs", defaultValue = "100", description = "Number of runs (default ${DEFAULT-VALUE}).")
+    @Option(names = "--runs", paramLabel = "N", defaultValue = "100", description = "Number of runs (default ${DEFAULT-VALUE}).")
     private int runs;
 
-    @Option(names = "--seed", defaultValue = "1", description = "Random seed (default ${DEFAULT-VALUE}); same seed, same numbers.")
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Random seed (default ${DEFAULT-VALUE}); same seed, same numbers.")
     private long seed;
 
-    @Option(names = "--threads", description = "Threads (default: all cores).")
+    @Option(names = "--threads", paramLabel = "N", description = "Threads (default: all cores).")
     private Integer threads;
 
     @Option(names = "--histogram", paramLabel = "METRIC",
@@ -119,10 +119,7 @@ public final class ToleranceCommand implements Callable<Integer> {
             w.printf(Locale.ROOT, "%-44s %10.4g %10.4g %10.4g %10.4g %10.4g%n", s.metric(), s.mean(), s.p5(), s.p95(),
                     s.min(), s.max());
         }
-        w.printf("outputs written to %s:%n", folder.dir());
-        for (Path p : folder.written()) {
-            w.printf("  %s%n", p.getFileName());
-        }
+        folder.report(w);
         w.println("Caution: " + Cautions.SHORT);
         return BranchsimMain.OK;
     }

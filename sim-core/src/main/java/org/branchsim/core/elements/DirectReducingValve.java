@@ -92,31 +92,6 @@ public final class DirectReducingValve implements Element, ReducingValve {
     }
 
     @Override
-    public String outletPressureSignal() {
-        return id + ".p.out";
-    }
-
-    @Override
-    public String drainFlowSignal() {
-        return id + ".drain.q";
-    }
-
-    @Override
-    public String drainPowerSignal() {
-        return id + ".drain.power";
-    }
-
-    @Override
-    public String meteringPowerSignal() {
-        return id + ".metering.power";
-    }
-
-    @Override
-    public String mainFlowSignal() {
-        return id + ".q";
-    }
-
-    @Override
     public void bind(Binder b) {
         density = b.fluid().density();
         nu = b.fluid().kinematicViscosity();

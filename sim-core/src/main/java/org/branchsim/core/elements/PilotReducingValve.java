@@ -188,31 +188,6 @@ public final class PilotReducingValve implements Element, ReducingValve {
     }
 
     @Override
-    public String outletPressureSignal() {
-        return id + ".p.out";
-    }
-
-    @Override
-    public String drainFlowSignal() {
-        return id + ".drain.q";
-    }
-
-    @Override
-    public String drainPowerSignal() {
-        return id + ".pilot.power";
-    }
-
-    @Override
-    public String meteringPowerSignal() {
-        return id + ".metering.power";
-    }
-
-    @Override
-    public String mainFlowSignal() {
-        return id + ".q";
-    }
-
-    @Override
     public void bind(Binder b) {
         fluid = b.fluid();
         density = fluid.density();
@@ -233,7 +208,7 @@ public final class PilotReducingValve implements Element, ReducingValve {
         qDrain = b.signal("drain.q", Dimension.VOLUME_FLOW);
         opening = b.signal("metering.area", Dimension.AREA);
         meteringPower = b.signal("metering.power", Dimension.POWER);
-        drainPower = b.signal("pilot.power", Dimension.POWER);
+        drainPower = b.signal("drain.power", Dimension.POWER);
         meteringLoss = b.account("metering.loss", EnergyAccount.Kind.LOSS);
         orificeLoss = b.account("damping orifice.loss", EnergyAccount.Kind.LOSS);
         pilotLoss = b.account("pilot seat.loss", EnergyAccount.Kind.LOSS);

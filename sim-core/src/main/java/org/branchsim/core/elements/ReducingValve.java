@@ -12,17 +12,27 @@ public interface ReducingValve {
     double setting();
 
     /** @return name of the outlet pressure signal */
-    String outletPressureSignal();
+    default String outletPressureSignal() {
+        return id() + ".p.out";
+    }
 
     /** @return name of the drain flow signal (pilot flow; zero-mean for a direct-acting valve) */
-    String drainFlowSignal();
+    default String drainFlowSignal() {
+        return id() + ".drain.q";
+    }
 
     /** @return name of the signal of power lost in the pilot stage and drain, W */
-    String drainPowerSignal();
+    default String drainPowerSignal() {
+        return id() + ".drain.power";
+    }
 
     /** @return name of the signal of power lost across the metering edge, W */
-    String meteringPowerSignal();
+    default String meteringPowerSignal() {
+        return id() + ".metering.power";
+    }
 
     /** @return name of the main (inlet to outlet) flow signal */
-    String mainFlowSignal();
+    default String mainFlowSignal() {
+        return id() + ".q";
+    }
 }
