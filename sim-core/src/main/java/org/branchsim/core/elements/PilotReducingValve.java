@@ -215,6 +215,11 @@ public final class PilotReducingValve implements Element, ReducingValve {
         chamberStored = b.account("chamber compression", EnergyAccount.Kind.STORED);
         b.discontinuity(new Corner(id, "metering edge reaches its closing point", "corner",
                 s -> main.edge().opening(spool.position(s))));
+        // main stage: metering flow, spool forces, damping orifice, chamber volume
+        b.couple(b.pressureOf(inlet), b.pressureOf(outlet), chamber, spool.positionSlot(), spool.velocitySlot(),
+                end == null ? null : end.pressureSlot());
+        // pilot stage: poppet forces and seat flow out of the chamber
+        b.couple(chamber, poppet.positionSlot(), poppet.velocitySlot(), b.pressureOf(drain));
     }
 
     private Forces spoolForces(StateView s) {

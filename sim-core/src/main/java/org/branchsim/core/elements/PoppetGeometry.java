@@ -6,29 +6,105 @@ import org.branchsim.core.laws.PoppetSeat;
 
 /**
  * A spring-loaded poppet on a seat: seat diameter, cone angle, spring, mass, damping, travel, Cd, and the
- * flow and force laws that follow from them. Shared by the direct-acting relief valve and the pilot stage
- * of the pilot-operated reducing valve.
- *
- * @param seatDiameter seat diameter, m
- * @param coneAngle full cone angle, rad (pi for a flat seat)
- * @param springRate spring rate, N/m
- * @param preload spring force at zero lift, N
- * @param mass moving mass (poppet plus a third of the spring), kg
- * @param damping viscous damping coefficient, N*s/m
- * @param maxLift lift at the stop, m
- * @param cd discharge coefficient
+ * flow and force laws that follow from them ({@link PoppetSeat} area, {@link OrificeLaw} flow,
+ * {@link FlowForce} with the jet leaving at half the cone angle). Shared by the direct-acting relief valve
+ * and the pilot stage of the pilot-operated reducing valve. The cone's trigonometry is computed once, since
+ * the laws are evaluated at every derivative evaluation.
  */
-public record PoppetGeometry(double seatDiameter, double coneAngle, double springRate, double preload,
-                             double mass, double damping, double maxLift, double cd) {
+public final class PoppetGeometry {
+    private final double seatDiameter;
+    private final double coneAngle;
+    private final double springRate;
+    private final double preload;
+    private final double mass;
+    private final double damping;
+    private final double maxLift;
+    private final double cd;
+    private final boolean flat;
+    private final double sinHalf;
+    private final double sinFull;
+    private final double usefulLift;
+    private final double jetCosine;
+
+    /**
+     * @param seatDiameter seat diameter, m
+     * @param coneAngle full cone angle, rad (pi for a flat seat)
+     * @param springRate spring rate, N/m
+     * @param preload spring force at zero lift, N
+     * @param mass moving mass (poppet plus a third of the spring), kg
+     * @param damping viscous damping coefficient, N*s/m
+     * @param maxLift lift at the stop, m
+     * @param cd discharge coefficient
+     */
+    public PoppetGeometry(double seatDiameter, double coneAngle, double springRate, double preload, double mass,
+                          double damping, double maxLift, double cd) {
+        this.seatDiameter = seatDiameter;
+        this.coneAngle = coneAngle;
+        this.springRate = springRate;
+        this.preload = preload;
+        this.mass = mass;
+        this.damping = damping;
+        this.maxLift = maxLift;
+        this.cd = cd;
+        this.flat = coneAngle >= Math.PI - 1e-9;
+        this.sinHalf = Math.sin(0.5 * Math.min(coneAngle, Math.PI));
+        this.sinFull = Math.sin(coneAngle);
+        this.usefulLift = PoppetSeat.usefulLift(seatDiameter, coneAngle);
+        this.jetCosine = Math.cos(Math.min(coneAngle, Math.PI) / 2.0);
+    }
+
+    /** @return seat diameter, m */
+    public double seatDiameter() {
+        return seatDiameter;
+    }
+
+    /** @return full cone angle, rad */
+    public double coneAngle() {
+        return coneAngle;
+    }
+
+    /** @return spring rate, N/m */
+    public double springRate() {
+        return springRate;
+    }
+
+    /** @return spring force at zero lift, N */
+    public double preload() {
+        return preload;
+    }
+
+    /** @return moving mass, kg */
+    public double mass() {
+        return mass;
+    }
+
+    /** @return viscous damping, N*s/m */
+    public double damping() {
+        return damping;
+    }
+
+    /** @return lift at the stop, m */
+    public double maxLift() {
+        return maxLift;
+    }
+
+    /** @return discharge coefficient */
+    public double cd() {
+        return cd;
+    }
 
     /** @return seat area the pressure acts on, m^2 */
     public double seatArea() {
         return PoppetSeat.seatArea(seatDiameter);
     }
 
-    /** @return flow area at a lift, m^2 */
+    /** @return flow area at a lift, m^2 (the {@link PoppetSeat} formula, limited to its useful lift) */
     public double area(double lift) {
-        return PoppetSeat.area(seatDiameter, coneAngle, Math.min(lift, PoppetSeat.usefulLift(seatDiameter, coneAngle)));
+        double x = Math.max(0.0, Math.min(lift, usefulLift));
+        if (flat) {
+            return Math.PI * seatDiameter * x;
+        }
+        return Math.PI * seatDiameter * x * sinHalf * (1.0 - x * sinFull / (2.0 * seatDiameter));
     }
 
     /**
@@ -43,14 +119,13 @@ public record PoppetGeometry(double seatDiameter, double coneAngle, double sprin
         if (a <= 0.0) {
             return 0.0;
         }
-        double dh = PoppetSeat.gapHydraulicDiameter(coneAngle, lift);
+        double dh = 2.0 * sinHalf * Math.max(lift, 1e-9);
         return OrificeLaw.flow(cd, a, dp, density, OrificeLaw.transitionPressure(cd, dh, density, nu));
     }
 
-    /** @return steady flow force closing the poppet, N; jet leaves at half the cone angle to the axis */
+    /** @return steady flow force closing the poppet, N; the jet leaves at half the cone angle to the axis */
     public double flowForce(double lift, double dp) {
-        double jet = Math.min(coneAngle, Math.PI) / 2.0;
-        return FlowForce.closingForce(cd, FlowForce.VELOCITY_COEFFICIENT, area(lift), dp, jet);
+        return 2.0 * cd * FlowForce.VELOCITY_COEFFICIENT * area(lift) * Math.abs(dp) * jetCosine;
     }
 
     /** @return a copy with a different preload, N */

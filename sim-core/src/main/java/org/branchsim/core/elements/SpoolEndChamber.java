@@ -55,6 +55,11 @@ public record SpoolEndChamber(double deadVolume, double orificeDiameter, double 
             stored = b.account("end chamber compression", EnergyAccount.Kind.STORED);
         }
 
+        /** @return the chamber's pressure state */
+        StateSlot pressureSlot() {
+            return pressure;
+        }
+
         /** @return the pressure under the spool end, Pa */
         double pressure(StateView s) {
             return s.value(pressure);

@@ -96,7 +96,8 @@ public final class Fluid {
         double compliance = 1.0 / oilBulkModulus + 1.0 / wallBulkModulus;
         if (airFraction > 0.0) {
             double pGas = Math.max(pAbs, 1.0);
-            double gasVolume = airFraction * Math.pow(Units.ATMOSPHERE / pGas, 1.0 / gasExponent);
+            double ratio = Units.ATMOSPHERE / pGas;
+            double gasVolume = airFraction * (gasExponent == 1.0 ? ratio : Math.pow(ratio, 1.0 / gasExponent));
             double fraction = gasVolume / (1.0 - airFraction + gasVolume);
             compliance += fraction / (gasExponent * pGas);
         }
@@ -104,8 +105,8 @@ public final class Fluid {
     }
 
     private static double softened(double pAbs) {
-        if (pAbs >= 40.0 * CAVITATION_SCALE) {
-            return 1.0; // exp(-40) is below double precision
+        if (pAbs >= 20.0 * CAVITATION_SCALE) {
+            return 1.0; // the factor differs from 1 by less than exp(-20) = 2e-9 here
         }
         if (pAbs <= 0.0) {
             return 1e-4;

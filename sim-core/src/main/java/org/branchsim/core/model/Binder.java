@@ -34,4 +34,15 @@ public interface Binder {
 
     /** Registers a discontinuity for the solver to watch. */
     void discontinuity(Discontinuity discontinuity);
+
+    /**
+     * Declares that these states may depend on each other (a block of the Jacobian's structure). An element
+     * that declares no block is taken as one block of all its states and its ports' pressures; declaring
+     * finer blocks lets the implicit solver estimate the Jacobian with fewer evaluations. Tank ports (null
+     * slots) are ignored.
+     */
+    void couple(StateSlot... states);
+
+    /** @return the pressure state of a port's node, or null for a tank */
+    StateSlot pressureOf(Node node);
 }

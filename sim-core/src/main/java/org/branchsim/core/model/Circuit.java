@@ -124,6 +124,19 @@ public final class Circuit {
         return Collections.unmodifiableList(all);
     }
 
+    /**
+     * @return true when some scheduled input is ramping at time t, i.e. when the equations depend on time
+     *         explicitly there (between ramps they are autonomous)
+     */
+    public boolean timeDependentAt(double t) {
+        for (ScheduledInput in : inputs) {
+            if (in.rampingAt(t)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** @return the signal with that name, or null */
     public SignalHandle signal(String signalName) {
         for (SignalHandle h : signals) {

@@ -86,6 +86,7 @@ public final class CircuitBuilder {
                     block.add(port.pressureSlot().index());
                 }
             }
+            List<int[]> declared = new ArrayList<>();
             element.bind(new Binder() {
                 @Override
                 public Fluid fluid() {
@@ -124,8 +125,23 @@ public final class CircuitBuilder {
                 public void discontinuity(Discontinuity d) {
                     discontinuities.add(d);
                 }
+
+                @Override
+                public void couple(StateSlot... group) {
+                    declared.add(java.util.Arrays.stream(group).filter(java.util.Objects::nonNull)
+                            .mapToInt(StateSlot::index).distinct().toArray());
+                }
+
+                @Override
+                public StateSlot pressureOf(Node node) {
+                    return node.pressureSlot();
+                }
             });
-            blocks.add(block.stream().mapToInt(Integer::intValue).distinct().toArray());
+            if (declared.isEmpty()) {
+                blocks.add(block.stream().mapToInt(Integer::intValue).distinct().toArray());
+            } else {
+                blocks.addAll(declared);
+            }
         }
         double[] y0 = initial.stream().mapToDouble(Double::doubleValue).toArray();
         return new Circuit(name, fluid, nodeList, elements, states, y0, signals, accounts, inputs,

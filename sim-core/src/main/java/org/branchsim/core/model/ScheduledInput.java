@@ -106,6 +106,16 @@ public final class ScheduledInput {
         return result;
     }
 
+    /** @return true when a ramp of non-zero duration is under way at time t (start included, end excluded) */
+    public boolean rampingAt(double t) {
+        for (Ramp r : ramps) {
+            if (r.duration() > 0.0 && t >= r.start() && t < r.start() + r.duration()) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** @return the times (s) where the function has a corner or a step, without duplicates */
     public double[] corners() {
         TreeSet<Double> set = new TreeSet<>();

@@ -18,8 +18,10 @@ final class IntegratorFactory {
     static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol, Circuit circuit) {
         switch (s.method()) {
             case IMPLICIT:
-                return new RosenbrockIntegrator(s.minStep(), s.maxStep(), absTol, relTol,
+                RosenbrockIntegrator r = new RosenbrockIntegrator(s.minStep(), s.maxStep(), absTol, relTol,
                         SparsityPattern.ofBlocks(circuit.dimension(), circuit.couplings()), JACOBIAN_MAX_AGE);
+                r.setTimeDependence(circuit::timeDependentAt);
+                return r;
             case REFERENCE:
                 return new DormandPrince853Integrator(s.minStep(), s.maxStep(), absTol, relTol);
             case EXPLICIT:

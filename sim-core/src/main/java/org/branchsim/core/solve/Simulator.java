@@ -68,7 +68,7 @@ public final class Simulator {
         AdaptiveStepsizeIntegrator integrator = IntegratorFactory.create(settings, absTol, relTol, circuit);
         integrator.setMaxEvaluations((int) Math.min(Integer.MAX_VALUE, settings.maxEvaluations()));
 
-        AdaptableInterval maxCheck = AdaptableInterval.of(Math.min(settings.maxStep(), settings.outputInterval()));
+        AdaptableInterval maxCheck = AdaptableInterval.of(settings.maxStep());
         for (Discontinuity d : circuit.discontinuities()) {
             integrator.addEventDetector(new DiscontinuityDetector(circuit, d, log, maxCheck, 200,
                     new BracketingNthOrderBrentSolver(0.0, settings.eventTolerance(), 0.0, 5)));

@@ -52,9 +52,16 @@ public final class SparsityPattern {
     }
 
     private static int[][] colour(int n, BitSet[] cols) {
+        // greedy colouring, densest columns first (Curtis-Powell-Reid with largest-first ordering)
+        Integer[] order = new Integer[n];
+        for (int j = 0; j < n; j++) {
+            order[j] = j;
+        }
+        java.util.Arrays.sort(order, (a, b) -> cols[b].cardinality() != cols[a].cardinality()
+                ? Integer.compare(cols[b].cardinality(), cols[a].cardinality()) : Integer.compare(a, b));
         List<List<Integer>> groups = new ArrayList<>();
         List<BitSet> used = new ArrayList<>();
-        for (int j = 0; j < n; j++) {
+        for (int j : order) {
             int g = 0;
             while (g < groups.size() && used.get(g).intersects(cols[j])) {
                 g++;
