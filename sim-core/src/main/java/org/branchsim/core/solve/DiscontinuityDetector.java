@@ -19,15 +19,17 @@ import org.hipparchus.ode.events.ODEEventHandler;
 final class DiscontinuityDetector extends AbstractODEDetector<DiscontinuityDetector> {
 
     private final Circuit circuit;
+    private final SharedView views;
     private final Discontinuity discontinuity;
     private final List<EventRecord> log;
     private final Handler handler = new Handler();
 
-    DiscontinuityDetector(Circuit circuit, Discontinuity discontinuity, List<EventRecord> log,
+    DiscontinuityDetector(Circuit circuit, SharedView views, Discontinuity discontinuity, List<EventRecord> log,
                           AdaptableInterval maxCheck, int maxIter,
                           BracketedUnivariateSolver<UnivariateFunction> solver) {
         super(maxCheck, maxIter, solver, null);
         this.circuit = circuit;
+        this.views = views;
         this.discontinuity = discontinuity;
         this.log = log;
     }
@@ -36,7 +38,7 @@ final class DiscontinuityDetector extends AbstractODEDetector<DiscontinuityDetec
     protected DiscontinuityDetector create(AdaptableInterval newMaxCheck, int newMaxIter,
                                            BracketedUnivariateSolver<UnivariateFunction> newSolver,
                                            ODEEventHandler newHandler) {
-        return new DiscontinuityDetector(circuit, discontinuity, log, newMaxCheck, newMaxIter, newSolver);
+        return new DiscontinuityDetector(circuit, views, discontinuity, log, newMaxCheck, newMaxIter, newSolver);
     }
 
     @Override
@@ -46,7 +48,7 @@ final class DiscontinuityDetector extends AbstractODEDetector<DiscontinuityDetec
 
     @Override
     public double g(ODEStateAndDerivative state) {
-        return discontinuity.g(circuit.view(state.getTime(), state.getPrimaryState()));
+        return discontinuity.g(views.of(state));
     }
 
     /** Applies the discontinuity's response and keeps the edited state for the reset. */
@@ -58,6 +60,7 @@ final class DiscontinuityDetector extends AbstractODEDetector<DiscontinuityDetec
             double[] y = state.getPrimaryState();
             StateEditor editor = circuit.editor(state.getTime(), y);
             Discontinuity.Response r = discontinuity.onCrossing(increasing, editor);
+            views.invalidate();
             switch (r) {
                 case STATE_CHANGED:
                     edited = y;

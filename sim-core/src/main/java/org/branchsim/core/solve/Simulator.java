@@ -69,8 +69,9 @@ public final class Simulator {
         integrator.setMaxEvaluations((int) Math.min(Integer.MAX_VALUE, settings.maxEvaluations()));
 
         AdaptableInterval maxCheck = AdaptableInterval.of(settings.maxStep());
+        SharedView views = new SharedView(circuit);
         for (Discontinuity d : circuit.discontinuities()) {
-            integrator.addEventDetector(new DiscontinuityDetector(circuit, d, log, maxCheck, 200,
+            integrator.addEventDetector(new DiscontinuityDetector(circuit, views, d, log, maxCheck, 200,
                     new BracketingNthOrderBrentSolver(0.0, settings.eventTolerance(), 0.0, 5)));
         }
         GridSampler sampler = new GridSampler(circuit, trace, settings.outputInterval(), settings.endTime(), reporter);
