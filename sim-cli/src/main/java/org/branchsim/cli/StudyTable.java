@@ -11,7 +11,9 @@ import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.analysis.SignalStatistics;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.results.SolverStatistics;
+import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
+import org.branchsim.core.study.Variant;
 import org.branchsim.core.study.VariantOutcome;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Unit;
@@ -22,6 +24,25 @@ import org.branchsim.core.units.UnitSystem;
  * ranking and statistics. Columns are deterministic: no wall-clock times.
  */
 final class StudyTable {
+
+    /**
+     * What a study keeps of one variant: its values, its error (null when it ran), its metrics and the
+     * signals chosen for overlays (null when none).
+     */
+    record Row(Variant variant, String error, Map<String, Double> metrics, Trace overlay) {
+        boolean ok() {
+            return error == null;
+        }
+
+        /** Reduces an outcome to a row, on the worker thread. */
+        static Row of(VariantOutcome o, UnitSystem units, List<String> overlaySignals) {
+            if (!o.ok()) {
+                return new Row(o.variant(), o.error(), Map.of(), null);
+            }
+            Trace overlay = overlaySignals.isEmpty() ? null : o.result().trace().select(overlaySignals);
+            return new Row(o.variant(), null, StudyTable.metrics(o, units), overlay);
+        }
+    }
 
     private StudyTable() {
     }
@@ -66,16 +87,46 @@ final class StudyTable {
     }
 
     /** @return every metric column name over all successful variants, in first-seen order */
-    static List<String> columns(List<Map<String, Double>> rows) {
+    static List<String> columns(List<Row> rows) {
         List<String> cols = new ArrayList<>();
-        for (Map<String, Double> r : rows) {
-            for (String k : r.keySet()) {
+        for (Row r : rows) {
+            for (String k : r.metrics().keySet()) {
                 if (!cols.contains(k)) {
                     cols.add(k);
                 }
             }
         }
         return cols;
+    }
+
+    /**
+     * @param parameters varied parameter paths (columns after the variant number)
+     * @param rows the rows
+     * @param cols metric columns
+     * @return the CSV text: variant, parameters, status, error, metrics
+     */
+    static String csv(List<String> parameters, List<Row> rows, List<String> cols) {
+        StringBuilder sb = new StringBuilder("variant");
+        for (String p : parameters) {
+            sb.append(',').append(field(p));
+        }
+        sb.append(",status,error");
+        for (String c : cols) {
+            sb.append(',').append(field(c));
+        }
+        sb.append('\n');
+        for (Row r : rows) {
+            sb.append(r.variant().index());
+            for (String p : parameters) {
+                sb.append(',').append(field(String.valueOf(r.variant().values().get(p))));
+            }
+            sb.append(',').append(r.ok() ? "ok" : "failed").append(',').append(field(r.error()));
+            for (String c : cols) {
+                sb.append(',').append(field(r.metrics().get(c)));
+            }
+            sb.append('\n');
+        }
+        return sb.toString();
     }
 
     /** @return a CSV field: numbers with 7 significant digits, text quoted when needed */

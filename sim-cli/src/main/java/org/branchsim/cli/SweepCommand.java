@@ -18,7 +18,6 @@ import org.branchsim.core.study.ParameterPath;
 import org.branchsim.core.study.StudyRunner;
 import org.branchsim.core.study.ValueText;
 import org.branchsim.core.study.Variant;
-import org.branchsim.core.study.VariantOutcome;
 import org.branchsim.plots.TraceCharts;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -78,31 +77,46 @@ public final class SweepCommand implements Callable<Integer> {
             axes.put(path, values(v.substring(eq + 1).trim(), path));
         }
         List<Variant> variants = grid(axes);
+        List<String> overlay = overlaySignals(base);
         int n = threads == null ? Runtime.getRuntime().availableProcessors() : Math.max(1, threads);
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
-        List<VariantOutcome> outcomes = StudyRunner.run(base.file(), base.document(), variants, n,
-                done -> progress(err, done, variants.size(), start));
+        List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), variants, n,
+                done -> progress(err, done, variants.size(), start), o -> StudyTable.Row.of(o, base.units(), overlay));
         err.println();
         OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-sweep"));
-        List<Map<String, Double>> rows = new ArrayList<>();
-        for (VariantOutcome o : outcomes) {
-            rows.add(o.ok() ? StudyTable.metrics(o, base.units()) : Map.of());
-        }
         List<String> cols = StudyTable.columns(rows);
-        folder.writeText("summary.csv", csv(axes, outcomes, rows, cols));
-        writeOverlays(base, outcomes, folder);
         String metric = rankBy != null ? rankBy : cols.stream().filter(c -> c.contains("overshoot")).findFirst()
                 .orElse(cols.isEmpty() ? null : cols.get(0));
         if (metric != null && !cols.contains(metric)) {
             throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--rank-by: expected a summary.csv column ("
                     + String.join(", ", cols) + "), found \"" + metric + "\"");
         }
-        printRanked(axes, outcomes, rows, metric);
+        folder.writeText("summary.csv", StudyTable.csv(new ArrayList<>(axes.keySet()), rows, cols));
+        writeOverlays(base, rows, overlay, folder);
+        printRanked(rows, metric);
         PrintWriter w = spec.commandLine().getOut();
         folder.report(w);
         w.println("Caution: " + Cautions.SHORT);
         return BranchsimMain.OK;
+    }
+
+    /** @return the signals to overlay: those asked for (checked), else the first reducing valve's outlet or node */
+    private List<String> overlaySignals(Scenario base) {
+        if (signals != null && !signals.isEmpty()) {
+            for (String signal : signals) {
+                if (base.circuit().signal(signal) == null) {
+                    throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--signals: no signal \"" + signal
+                            + "\" in this circuit");
+                }
+            }
+            return signals;
+        }
+        return List.of(base.circuit().elements().stream()
+                .filter(e -> e instanceof org.branchsim.core.elements.ReducingValve)
+                .map(e -> ((org.branchsim.core.elements.ReducingValve) e).outletPressureSignal())
+                .findFirst().orElse(base.circuit().nodes().stream().filter(nd -> !nd.isTank())
+                        .map(nd -> nd.id() + ".p").findFirst().orElse(base.circuit().signals().get(0).name())));
     }
 
     static List<Object> values(String spec, String path) {
@@ -210,53 +224,15 @@ public final class SweepCommand implements Callable<Integer> {
         }
     }
 
-    static String csv(Map<String, List<Object>> axes, List<VariantOutcome> outcomes, List<Map<String, Double>> rows,
-                      List<String> cols) {
-        StringBuilder sb = new StringBuilder("variant");
-        for (String p : axes.keySet()) {
-            sb.append(',').append(StudyTable.field(p));
-        }
-        sb.append(",status,error");
-        for (String c : cols) {
-            sb.append(',').append(StudyTable.field(c));
-        }
-        sb.append('\n');
-        for (int i = 0; i < outcomes.size(); i++) {
-            VariantOutcome o = outcomes.get(i);
-            sb.append(o.variant().index());
-            for (String p : axes.keySet()) {
-                sb.append(',').append(StudyTable.field(String.valueOf(o.variant().values().get(p))));
-            }
-            sb.append(',').append(o.ok() ? "ok" : "failed").append(',').append(StudyTable.field(o.error()));
-            for (String c : cols) {
-                sb.append(',').append(StudyTable.field(rows.get(i).get(c)));
-            }
-            sb.append('\n');
-        }
-        return sb.toString();
-    }
-
-    private void writeOverlays(Scenario base, List<VariantOutcome> outcomes, OutputFolder folder) {
-        List<VariantOutcome> ok = outcomes.stream().filter(VariantOutcome::ok).toList();
+    private void writeOverlays(Scenario base, List<StudyTable.Row> rows, List<String> overlay, OutputFolder folder) {
+        List<StudyTable.Row> ok = rows.stream().filter(StudyTable.Row::ok).toList();
         if (ok.isEmpty()) {
             return;
         }
-        List<String> chosen = signals;
-        if (chosen == null || chosen.isEmpty()) {
-            String outlet = ok.get(0).result().circuit().elements().stream()
-                    .filter(e -> e instanceof org.branchsim.core.elements.ReducingValve)
-                    .map(e -> ((org.branchsim.core.elements.ReducingValve) e).outletPressureSignal())
-                    .findFirst().orElse(ok.get(0).result().circuit().nodes().stream().filter(nd -> !nd.isTank())
-                            .map(nd -> nd.id() + ".p").findFirst().orElse(ok.get(0).result().trace().columns().get(0).name()));
-            chosen = List.of(outlet);
-        }
-        for (String signal : chosen) {
-            if (ok.get(0).result().trace().indexOf(signal) < 0) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--signals: no signal \"" + signal + "\" in this circuit");
-            }
+        for (String signal : overlay) {
             List<TraceCharts.Labelled> runs = new ArrayList<>();
-            for (VariantOutcome o : ok) {
-                runs.add(new TraceCharts.Labelled(label(o.variant()), o.result().trace()));
+            for (StudyTable.Row r : ok) {
+                runs.add(new TraceCharts.Labelled(label(r.variant()), r.overlay()));
             }
             String file = "overlay-" + FigureSet.slug(signal) + ".png";
             folder.write(file, p -> TraceCharts.compare(runs, signal, base.name() + " sweep: " + signal, base.units(), p));
@@ -269,26 +245,24 @@ public final class SweepCommand implements Callable<Integer> {
         return String.join(", ", parts);
     }
 
-    private void printRanked(Map<String, List<Object>> axes, List<VariantOutcome> outcomes, List<Map<String, Double>> rows,
-                             String metric) {
+    private void printRanked(List<StudyTable.Row> rows, String metric) {
         PrintWriter w = spec.commandLine().getOut();
         List<Integer> order = new ArrayList<>();
-        for (int i = 0; i < outcomes.size(); i++) {
+        for (int i = 0; i < rows.size(); i++) {
             order.add(i);
         }
         if (metric != null) {
-            Comparator<Integer> byMetric = Comparator.comparingDouble(i -> {
-                Double v = rows.get(i).get(metric);
+            order.sort(Comparator.comparingDouble(i -> {
+                Double v = rows.get(i).metrics().get(metric);
                 return v == null || !Double.isFinite(v) ? Double.MAX_VALUE : (descending ? -v : v);
-            });
-            order.sort(byMetric);
+            }));
         }
-        w.printf("%d variants, ranked by %s%s:%n", outcomes.size(), metric, descending ? " (largest first)" : "");
+        w.printf("%d variants, ranked by %s%s:%n", rows.size(), metric, descending ? " (largest first)" : "");
         for (int i : order) {
-            VariantOutcome o = outcomes.get(i);
-            Double v = metric == null ? null : rows.get(i).get(metric);
-            w.printf(Locale.ROOT, "  #%-3d %-50s %s%n", o.variant().index(), label(o.variant()),
-                    o.ok() ? (v == null ? "-" : String.format(Locale.ROOT, "%.4g", v)) : "FAILED: " + o.error());
+            StudyTable.Row r = rows.get(i);
+            Double v = metric == null ? null : r.metrics().get(metric);
+            w.printf(Locale.ROOT, "  #%-3d %-50s %s%n", r.variant().index(), label(r.variant()),
+                    r.ok() ? (v == null ? "-" : String.format(Locale.ROOT, "%.4g", v)) : "FAILED: " + r.error());
         }
     }
 }

@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
@@ -14,7 +13,6 @@ import org.branchsim.core.study.StudyRunner;
 import org.branchsim.core.study.ToleranceStudy;
 import org.branchsim.core.study.ValueText;
 import org.branchsim.core.study.Variant;
-import org.branchsim.core.study.VariantOutcome;
 import org.branchsim.plots.HistogramChart;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -68,22 +66,17 @@ public final class ToleranceCommand implements Callable<Integer> {
         int n = threads == null ? Runtime.getRuntime().availableProcessors() : Math.max(1, threads);
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
-        List<VariantOutcome> outcomes = StudyRunner.run(base.file(), base.document(), variants, n,
-                d -> SweepCommand.progress(err, d, runs, start));
+        List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), variants, n,
+                d -> SweepCommand.progress(err, d, runs, start), o -> StudyTable.Row.of(o, base.units(), List.of()));
         err.println();
-        List<Map<String, Double>> rows = new ArrayList<>();
-        for (VariantOutcome o : outcomes) {
-            rows.add(o.ok() ? StudyTable.metrics(o, base.units()) : Map.of());
-        }
         List<String> cols = StudyTable.columns(rows);
         List<ToleranceStudy.Statistics> stats = new ArrayList<>();
         for (String c : cols) {
-            stats.add(ToleranceStudy.statistics(c, rows.stream().mapToDouble(r -> r.getOrDefault(c, Double.NaN)).toArray()));
+            stats.add(ToleranceStudy.statistics(c, values(rows, c)));
         }
         OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-tolerance"));
-        java.util.Map<String, List<Object>> axes = new java.util.LinkedHashMap<>();
-        params.forEach(p -> axes.put(p.path(), List.of()));
-        folder.writeText("runs.csv", SweepCommand.csv(axes, outcomes, rows, cols));
+        folder.writeText("runs.csv", StudyTable.csv(params.stream().map(ToleranceStudy.Parameter::path).toList(),
+                rows, cols));
         StringBuilder sum = new StringBuilder("metric,runs,mean,p5,p95,min,max\n");
         for (ToleranceStudy.Statistics s : stats) {
             sum.append(StudyTable.field(s.metric())).append(',').append(s.count()).append(',')
@@ -99,8 +92,7 @@ public final class ToleranceCommand implements Callable<Integer> {
                 throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--histogram: expected one of " + String.join(", ", cols)
                         + ", found \"" + metric + "\"");
             }
-            double[] values = rows.stream().mapToDouble(r -> r.getOrDefault(metric, Double.NaN))
-                    .filter(Double::isFinite).toArray();
+            double[] values = java.util.Arrays.stream(values(rows, metric)).filter(Double::isFinite).toArray();
             if (values.length > 0) {
                 folder.write("histogram-" + FigureSet.slug(metric) + ".png", p -> HistogramChart.save(values,
                         Math.max(5, (int) Math.ceil(Math.sqrt(values.length))),
@@ -109,7 +101,7 @@ public final class ToleranceCommand implements Callable<Integer> {
         }
         PrintWriter w = spec.commandLine().getOut();
         w.printf("%s: %d runs, seed %d, %d failed; toleranced values:%n", base.name(), runs, seed,
-                outcomes.stream().filter(o -> !o.ok()).count());
+                rows.stream().filter(r -> !r.ok()).count());
         for (ToleranceStudy.Parameter p : params) {
             w.printf(Locale.ROOT, "  %s: %s, drawn uniformly from %s to %s %s%n", p.path(), p.tolerance().nominal(),
                     ValueText.format(p.tolerance().low()), ValueText.format(p.tolerance().high()), p.tolerance().unit());
@@ -122,5 +114,9 @@ public final class ToleranceCommand implements Callable<Integer> {
         folder.report(w);
         w.println("Caution: " + Cautions.SHORT);
         return BranchsimMain.OK;
+    }
+
+    private static double[] values(List<StudyTable.Row> rows, String metric) {
+        return rows.stream().mapToDouble(r -> r.metrics().getOrDefault(metric, Double.NaN)).toArray();
     }
 }

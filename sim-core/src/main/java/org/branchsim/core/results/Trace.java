@@ -81,6 +81,29 @@ public final class Trace {
         return series(i);
     }
 
+    /** @return a trace with only the named signals (same times) */
+    public Trace select(List<String> names) {
+        List<Column> cols = new ArrayList<>();
+        int[] idx = new int[names.size()];
+        for (int k = 0; k < names.size(); k++) {
+            idx[k] = indexOf(names.get(k));
+            if (idx[k] < 0) {
+                throw new IllegalArgumentException("no signal named " + names.get(k));
+            }
+            cols.add(columns.get(idx[k]));
+        }
+        Trace out = new Trace(cols);
+        for (int r = 0; r < rows.size(); r++) {
+            double[] row = rows.get(r);
+            double[] v = new double[idx.length];
+            for (int k = 0; k < idx.length; k++) {
+                v[k] = row[idx[k]];
+            }
+            out.add(times.get(r), v);
+        }
+        return out;
+    }
+
     /** @return the value of a signal at the sample nearest to time t, SI */
     public double valueAt(String name, double t) {
         int i = indexOf(name);

@@ -8,6 +8,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Function;
 import java.util.function.IntConsumer;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.results.SimulationResult;
@@ -37,6 +38,24 @@ public final class StudyRunner {
      */
     public static List<VariantOutcome> run(String fileName, Located document, List<Variant> variants, int threads,
                                            IntConsumer progress) {
+        return run(fileName, document, variants, threads, progress, o -> o);
+    }
+
+    /**
+     * Runs the variants and reduces each outcome on its worker thread (to its metrics, say), so that large
+     * studies do not keep every trace in memory.
+     *
+     * @param fileName scenario file name (for messages)
+     * @param document the base document (not modified)
+     * @param variants the variants
+     * @param threads threads to use (at least 1)
+     * @param progress called with the number of variants done after each one (from worker threads)
+     * @param reduce what to keep of each outcome
+     * @param <R> the kept type
+     * @return one kept value per variant, in variant order
+     */
+    public static <R> List<R> run(String fileName, Located document, List<Variant> variants, int threads,
+                                  IntConsumer progress, Function<VariantOutcome, R> reduce) {
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, threads), r -> {
             Thread t = new Thread(r, "branchsim-variant");
             t.setDaemon(true);
@@ -44,16 +63,16 @@ public final class StudyRunner {
         });
         AtomicInteger done = new AtomicInteger();
         try {
-            List<Future<VariantOutcome>> futures = new ArrayList<>();
+            List<Future<R>> futures = new ArrayList<>();
             for (Variant v : variants) {
                 futures.add(pool.submit(() -> {
-                    VariantOutcome o = runOne(fileName, document, v);
+                    R kept = reduce.apply(runOne(fileName, document, v));
                     progress.accept(done.incrementAndGet());
-                    return o;
+                    return kept;
                 }));
             }
-            List<VariantOutcome> out = new ArrayList<>();
-            for (Future<VariantOutcome> f : futures) {
+            List<R> out = new ArrayList<>();
+            for (Future<R> f : futures) {
                 out.add(f.get());
             }
             return out;
@@ -80,6 +99,9 @@ public final class StudyRunner {
             return new VariantOutcome(v, scenario, r, null);
         } catch (BranchsimException e) {
             return new VariantOutcome(v, scenario, null, e.fullReport().replace(System.lineSeparator(), " | "));
+        } catch (RuntimeException e) {
+            // a defect must not take the other variants down with it; the message says what happened
+            return new VariantOutcome(v, scenario, null, "internal error: " + e);
         }
     }
 }
