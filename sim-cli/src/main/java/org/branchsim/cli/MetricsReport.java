@@ -7,7 +7,6 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import org.branchsim.core.analysis.OscillationFinding;
-import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import java.util.Map;
 import org.branchsim.core.analysis.SignalStatistics;
@@ -31,8 +30,15 @@ public final class MetricsReport {
     private MetricsReport() {
     }
 
-    /** @return the metrics document */
-    public static ObjectNode build(Scenario scenario, SimulationResult result) {
+    /**
+     * @param scenario the scenario
+     * @param result its run
+     * @param valves regulation metrics of its reducing valves
+     * @param oscillations oscillations found after the transients
+     * @return the metrics document
+     */
+    public static ObjectNode build(Scenario scenario, SimulationResult result, List<ReducingValveMetrics> valves,
+                                   List<OscillationFinding> oscillations) {
         UnitSystem units = scenario.units();
         ObjectNode root = MAPPER.createObjectNode();
         root.put("scenario", scenario.name());
@@ -51,10 +57,9 @@ public final class MetricsReport {
             o.put("minimumTime_s", round(s.minimumTime()));
             o.put("final", round(u.fromSi(s.last())));
         }
-        root.set("reducingValves", reducingValves(ReducingValveMetrics.of(result, scenario.metricsFrom(),
-                scenario.metricsTo()), units, scenario.metricsFrom(), scenario.metricsTo()));
+        root.set("reducingValves", reducingValves(valves, units, scenario.metricsFrom(), scenario.metricsTo()));
         ArrayNode osc = root.putArray("oscillations");
-        for (OscillationFinding f : OscillationScan.scan(result)) {
+        for (OscillationFinding f : oscillations) {
             osc.add(finding(f, units));
         }
         root.set("energy", energy(result.energy(), units));

@@ -42,9 +42,11 @@ public final class RunCommand implements Callable<Integer> {
         Scenario s = scenario.load();
         SimulationResult result = Simulator.run(s.circuit(), s.solver());
         OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name()));
-        String summary = summary(s, result);
+        List<ReducingValveMetrics> valves = ReducingValveMetrics.of(result, s.metricsFrom(), s.metricsTo());
+        List<OscillationFinding> oscillations = OscillationScan.scan(result);
+        String summary = summary(s, result, valves, oscillations);
         folder.writeText("trace.csv", TraceCsv.format(result.trace(), s.units()));
-        folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result)));
+        folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
         FigureSet.write(s, result.trace(), folder);
         folder.writeText("summary.txt", summary);
         PrintWriter w = spec.commandLine().getOut();
@@ -53,7 +55,8 @@ public final class RunCommand implements Callable<Integer> {
         return BranchsimMain.OK;
     }
 
-    static String summary(Scenario s, SimulationResult r) {
+    static String summary(Scenario s, SimulationResult r, List<ReducingValveMetrics> valves,
+                          List<OscillationFinding> osc) {
         StringBuilder sb = new StringBuilder();
         String nl = System.lineSeparator();
         sb.append("branchsim run: ").append(s.name()).append(" (").append(s.file()).append(')').append(nl);
@@ -73,7 +76,7 @@ public final class RunCommand implements Callable<Integer> {
         }
         Unit qu = s.units().displayUnit(Dimension.VOLUME_FLOW);
         Unit wu = s.units().displayUnit(Dimension.POWER);
-        for (ReducingValveMetrics m : ReducingValveMetrics.of(r, s.metricsFrom(), s.metricsTo())) {
+        for (ReducingValveMetrics m : valves) {
             sb.append(String.format(Locale.ROOT,
                     "reducing valve %s (%.3g s to %.3g s): setting %.2f %s, steady %.2f (%+.2f %%), peak %.2f at %.3f s, "
                             + "overshoot %.2f %s (%.1f %% of setting), %s; drain %.3f %s, pilot loss %.3g %s, "
@@ -87,7 +90,6 @@ public final class RunCommand implements Callable<Integer> {
                     qu.fromSi(m.drainFlow()), qu.symbol(), wu.fromSi(m.drainPower()), wu.symbol(),
                     wu.fromSi(m.meteringPower()), wu.symbol()));
         }
-        List<OscillationFinding> osc = OscillationScan.scan(r);
         if (osc.isEmpty()) {
             sb.append("oscillation: none sustained after the transients").append(nl);
         }
