@@ -99,6 +99,18 @@ class RunCommandTest {
     }
 
     @Test
+    void stepSizeUnderflowExitsOneAndNamesTimeAndStates(@TempDir Path dir) throws IOException {
+        Path limited = dir.resolve("coarse.json");
+        Files.writeString(limited, Files.readString(SCENARIOS.resolve("feed-stall.json"))
+                .replace("\"relativeTolerance\": 1e-6", "\"relativeTolerance\": 1e-6, \"minStep\": \"1 ms\", \"maxStep\": \"2 ms\""));
+        Outcome o = run("run", limited.toString(), "--out", dir.resolve("out").toString());
+        assertEquals(1, o.code(), o.err());
+        assertTrue(o.err().contains("step size fell below the minimum"), o.err());
+        assertTrue(o.err().contains("at t = ") && o.err().contains("pumpLine.p"), o.err());
+        assertFalse(Files.exists(dir.resolve("out")));
+    }
+
+    @Test
     void usageErrorsExitTwo() {
         assertEquals(2, run().code());
         assertEquals(2, run("run").code());

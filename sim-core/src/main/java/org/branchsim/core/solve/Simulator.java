@@ -124,7 +124,7 @@ public final class Simulator {
         String t = reporter.time(reporter.lastTime());
         if (specifier == LocalizedODEFormats.MINIMAL_STEPSIZE_REACHED_DURING_INTEGRATION) {
             return new BranchsimException(ErrorKey.STEP_UNDERFLOW, List.of(), e,
-                    Double.toString(settings.minStep()), t, "see states", reporter.describeLastGood());
+                    Double.toString(settings.minStep()), t, reporter.describeLastGood());
         }
         if (specifier == LocalizedCoreFormats.MAX_COUNT_EXCEEDED) {
             return new BranchsimException(ErrorKey.TOO_MANY_EVALUATIONS, List.of(), e,
