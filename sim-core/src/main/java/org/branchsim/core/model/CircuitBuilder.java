@@ -67,7 +67,10 @@ public final class CircuitBuilder {
                 initial.add(n.initialPressure());
             } else {
                 inputs.add(n.tankPressure());
-                tankAccounts[nodeIndex] = new EnergyAccount(accounts.size(), n.id() + ".return", EnergyAccount.Kind.LOSS);
+                // a tank delivers p * (flow out of it): positive for a pressure source, negative for fluid
+                // returned into a pressurised tank (energy left in the return)
+                tankAccounts[nodeIndex] = new EnergyAccount(accounts.size(), n.id() + ".delivered",
+                        EnergyAccount.Kind.SUPPLY);
                 accounts.add(tankAccounts[nodeIndex]);
             }
             SignalHandle signal = new SignalHandle(signals.size(), n.id() + ".p", Dimension.PRESSURE);

@@ -30,10 +30,17 @@ public record EnergyBalance(Map<String, Double> accounts, Map<String, EnergyAcco
                 - total(EnergyAccount.Kind.STORED) - total(EnergyAccount.Kind.FLOW_FORCE);
     }
 
-    /** @return |residual| / supply, or 0 when nothing was supplied */
+    /**
+     * @return |residual| / |supply|; when nothing was supplied, relative to the largest account instead
+     *         (0 only when every account is zero)
+     */
     public double relativeResidual() {
-        double supply = total(EnergyAccount.Kind.SUPPLY);
-        return supply == 0.0 ? 0.0 : Math.abs(residual()) / Math.abs(supply);
+        double supply = Math.abs(total(EnergyAccount.Kind.SUPPLY));
+        if (supply == 0.0) {
+            double largest = accounts.values().stream().mapToDouble(Math::abs).max().orElse(0.0);
+            return largest == 0.0 ? 0.0 : Math.abs(residual()) / largest;
+        }
+        return Math.abs(residual()) / supply;
     }
 
     /** @return the accounts whose names start with a prefix (an element id plus '.'), J */

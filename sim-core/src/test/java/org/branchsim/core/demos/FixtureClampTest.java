@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.branchsim.core.analysis.ReducingValveMetrics;
+import org.branchsim.core.model.EnergyAccount;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.Trace;
 import org.junit.jupiter.api.BeforeAll;
@@ -64,6 +65,9 @@ class FixtureClampTest {
     void energyBalanceClosesOnBothDemos() {
         for (String demo : new String[] {"fixture-clamp", "regulation-bench"}) {
             SimulationResult r = DemoRuns.of(demo).result();
+            assertTrue(r.energy().total(EnergyAccount.Kind.SUPPLY) > 1e3, demo + ": energy is supplied (pump or source)");
+            assertTrue(r.energy().total(EnergyAccount.Kind.LOSS) > 0.5 * r.energy().total(EnergyAccount.Kind.SUPPLY),
+                    demo + ": most of it is lost in valves and orifices");
             assertTrue(r.energy().relativeResidual() < 0.01, demo + " residual " + r.energy().relativeResidual());
         }
     }
