@@ -198,6 +198,7 @@ public final class ScenarioLoader {
         if (!root.has("nodes") || list.isEmpty()) {
             root.problem("nodes", "a list of at least one node", root.has("nodes") ? "an empty list" : "none");
         }
+        boolean anyVolume = false;
         for (int i = 0; i < list.size(); i++) {
             Fields f = Fields.of(list.get(i), "nodes[" + i + "]", problems);
             String id = f.text("id");
@@ -216,6 +217,7 @@ public final class ScenarioLoader {
                 if (idOk && Geometry.ok(v, p0, wall)) {
                     node = Node.volume(id, v, wall, p0);
                 }
+                anyVolume = true;
             } else if (type != null) {
                 f.problem("type", "\"volume\" or \"tank\"", "\"" + type + "\"");
             }
@@ -224,6 +226,10 @@ public final class ScenarioLoader {
                 nodes.put(id, node);
                 builder.add(node);
             }
+        }
+        if (!list.isEmpty() && !anyVolume) {
+            root.problem("nodes", "at least one node of type \"volume\" (tanks alone hold no pressure state to simulate)",
+                    "only tanks");
         }
         return nodes;
     }

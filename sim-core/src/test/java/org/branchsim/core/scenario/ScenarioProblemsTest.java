@@ -147,6 +147,15 @@ class ScenarioProblemsTest {
     }
 
     @Test
+    void aCircuitOfTanksAloneIsRefused() {
+        String text = "{ \"name\": \"tanks\", \"fluid\": {},\n"
+                + "  \"nodes\": [ {\"id\": \"a\", \"type\": \"tank\", \"pressure\": \"10 bar\"}, {\"id\": \"b\", \"type\": \"tank\"} ],\n"
+                + "  \"elements\": [ {\"id\": \"o\", \"type\": \"orifice\", \"ports\": {\"a\": \"a\", \"b\": \"b\"}, \"diameter\": \"1 mm\"} ],\n"
+                + "  \"solver\": {\"endTime\": \"0.1 s\"} }";
+        assertProblem(onlyProblem(text), "nodes", 2, "at least one node of type \"volume\"", "only tanks");
+    }
+
+    @Test
     void allProblemsAreReportedTogether() throws IOException {
         String text = minimal().replace("\"80 bar\"", "\"80 barg\"").replace("\"10 kg\"", "\"0 kg\"");
         java.util.List<Problem> list = problems(text, false);
