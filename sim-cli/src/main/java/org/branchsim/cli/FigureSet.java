@@ -9,9 +9,9 @@ import org.branchsim.core.units.Dimension;
 import org.branchsim.plots.TraceCharts;
 
 /**
- * Chooses and writes a run's figures: pressures and flows overlaid, positions stacked (their scales
- * differ by orders of magnitude), then each plot group the scenario names (overlaid when its signals share
- * a dimension other than length, stacked otherwise).
+ * Chooses and writes a run's figures (signals that stay zero throughout are left out): pressures and flows
+ * overlaid, positions stacked (their scales differ by orders of magnitude), then each plot group the
+ * scenario names (overlaid when its signals share a dimension other than length, stacked otherwise).
  */
 public final class FigureSet {
 

@@ -40,8 +40,18 @@ public final class TraceCharts {
 
     private static final Color[] PALETTE = {
         new Color(0x1f5fa8), new Color(0xc8102e), new Color(0x2e8b57), new Color(0xe07b00),
-        new Color(0x6a3d9a), new Color(0x008b8b), new Color(0x8b5a2b), new Color(0x444444)
+        new Color(0x6a3d9a), new Color(0x008b8b), new Color(0x8b5a2b), new Color(0x444444),
+        new Color(0xd4a017), new Color(0xe75480), new Color(0x7fa7d9), new Color(0x9acd32)
     };
+
+    /** Line style of series k: a palette colour, dashed on the second pass through the palette. */
+    private static void style(XYLineAndShapeRenderer renderer, int k, float width) {
+        renderer.setSeriesPaint(k, PALETTE[k % PALETTE.length]);
+        boolean dashed = (k / PALETTE.length) % 2 == 1;
+        renderer.setSeriesStroke(k, dashed
+                ? new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f)
+                : new BasicStroke(width));
+    }
 
     private TraceCharts() {
     }
@@ -133,8 +143,7 @@ public final class TraceCharts {
         y.setAutoRangeMinimumSize(1e-9);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         for (int k = 0; k < signals.size(); k++) {
-            renderer.setSeriesPaint(k, PALETTE[k % PALETTE.length]);
-            renderer.setSeriesStroke(k, new BasicStroke(1.6f));
+            style(renderer, k, 1.6f);
         }
         XYPlot plot = new XYPlot(data, timeAxis(), y, renderer);
         plot.setBackgroundPaint(Color.WHITE);
@@ -193,8 +202,7 @@ public final class TraceCharts {
         y.setAutoRangeMinimumSize(1e-9);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         for (int k = 0; k < runs.size(); k++) {
-            renderer.setSeriesPaint(k, PALETTE[k % PALETTE.length]);
-            renderer.setSeriesStroke(k, new BasicStroke(1.4f));
+            style(renderer, k, 1.4f);
         }
         XYPlot plot = new XYPlot(data, timeAxis(), y, renderer);
         plot.setBackgroundPaint(Color.WHITE);
@@ -205,14 +213,24 @@ public final class TraceCharts {
         save(chart, file, PANEL_HEIGHT + 160);
     }
 
-    /** @return the names of a trace's signals of one dimension, in trace order */
+    /** @return the names of a trace's signals of one dimension that are not zero throughout, in trace order */
     public static List<String> signalsOf(Trace trace, Dimension d) {
         List<String> out = new ArrayList<>();
-        for (Trace.Column c : trace.columns()) {
-            if (c.dimension() == d) {
+        for (int i = 0; i < trace.columns().size(); i++) {
+            Trace.Column c = trace.columns().get(i);
+            if (c.dimension() == d && !allZero(trace.series(i))) {
                 out.add(c.name());
             }
         }
         return out;
+    }
+
+    private static boolean allZero(double[] values) {
+        for (double v : values) {
+            if (v != 0.0) {
+                return false;
+            }
+        }
+        return true;
     }
 }
