@@ -213,14 +213,9 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         for (int i = 0; i < n; i++) {
             yStage[i] = y[i] + A31 * k1[i];
         }
-        double[] f3;
-        try {
-            f3 = computeDerivatives(t + h, yStage);
-        } catch (RuntimeException e) {
-            if (!finite(yStage)) {
-                return Double.NaN;
-            }
-            throw e;
+        double[] f3 = stageDerivatives(t + h, yStage);
+        if (f3 == null) {
+            return Double.NaN;
         }
         for (int i = 0; i < n; i++) {
             k3[i] = f3[i] + (C31 * k1[i] + C32 * k2[i]) / h;
@@ -229,14 +224,9 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         for (int i = 0; i < n; i++) {
             yStage[i] = y[i] + A41 * k1[i] + A43 * k3[i];
         }
-        double[] f4;
-        try {
-            f4 = computeDerivatives(t + h, yStage);
-        } catch (RuntimeException e) {
-            if (!finite(yStage)) {
-                return Double.NaN;
-            }
-            throw e;
+        double[] f4 = stageDerivatives(t + h, yStage);
+        if (f4 == null) {
+            return Double.NaN;
         }
         for (int i = 0; i < n; i++) {
             k4[i] = f4[i] + (C41 * k1[i] + C42 * k2[i] + C43 * k3[i]) / h;
@@ -254,6 +244,17 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         }
         double err = FastMath.sqrt(sum / main);
         return finite(y1) ? err : Double.NaN;
+    }
+
+    /**
+     * @return f at a stage state, or null when the stage state is not finite (the step is then rejected and
+     *         retried smaller instead of failing the run)
+     */
+    private double[] stageDerivatives(double t, double[] yStage) {
+        if (!finite(yStage)) {
+            return null;
+        }
+        return computeDerivatives(t, yStage);
     }
 
     private static boolean finite(double[] v) {
