@@ -72,6 +72,27 @@ class StudyCommandsTest {
         assertEquals(2, RunCommandTest.run("modes", FEED, "--at", "soon").code());
     }
 
+    @Test
+    void diagnoseReportsAStableCircuitAsStable(@TempDir Path dir) throws IOException {
+        RunCommandTest.Outcome o = RunCommandTest.run("diagnose", FEED, "--out", dir.toString());
+        assertEquals(0, o.code(), o.err());
+        assertTrue(o.out().contains("No sustained oscillation"), o.out());
+        assertTrue(Files.readString(dir.resolve("diagnosis.json")).contains("\"recommended\" : null"));
+    }
+
+    @Test
+    void benchWritesItsFigures(@TempDir Path dir) throws IOException {
+        RunCommandTest.Outcome o = RunCommandTest.run("bench", "--runs", "1", "--warmup", "0", "--methods", "implicit",
+                "--end-time", "0.3 s", "--sweep-variants", "2", "--sweep-parameter", "elements.dcvPA.diameter",
+                "--out", dir.toString(), FEED);
+        assertEquals(0, o.code(), o.err());
+        List<String> csv = Files.readAllLines(dir.resolve("bench.csv"));
+        assertTrue(csv.get(0).startsWith("scenario,method,simulated_s,median_wall_s"), csv.get(0));
+        assertTrue(csv.get(1).startsWith("feed-stall,implicit,0.3"), csv.get(1));
+        assertTrue(Files.readString(dir.resolve("bench.json")).contains("\"variantsPerSecond\""));
+        assertEquals(2, RunCommandTest.run("bench", "--methods", "quantum", FEED).code());
+    }
+
     private static String[] concat(String[] a, String... b) {
         String[] out = new String[a.length + b.length];
         System.arraycopy(a, 0, out, 0, a.length);
