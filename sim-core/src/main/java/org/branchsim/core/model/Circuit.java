@@ -236,16 +236,6 @@ public final class Circuit {
         }
     }
 
-    /** @return the volume of a node including moving boundaries at (t, y), m^3 */
-    public double nodeVolume(Node node, double t, double[] y) {
-        Evaluation e = new Evaluation(nodes.length);
-        e.reset(t, y, new double[y.length], null, null, nodes);
-        for (Element element : elements) {
-            element.evaluate(e);
-        }
-        return node.volume() + e.extraVolumeOf(node);
-    }
-
     /** @return the node with that id, or null */
     public Node node(String id) {
         for (Node n : nodes) {
@@ -254,13 +244,5 @@ public final class Circuit {
             }
         }
         return null;
-    }
-
-    static List<String> names(List<StateSlot> slots) {
-        List<String> out = new ArrayList<>();
-        for (StateSlot s : slots) {
-            out.add(s.name());
-        }
-        return out;
     }
 }

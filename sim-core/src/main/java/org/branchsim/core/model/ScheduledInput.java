@@ -1,7 +1,6 @@
 package org.branchsim.core.model;
 
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
 import java.util.TreeSet;
 import org.branchsim.core.units.Dimension;
@@ -46,27 +45,11 @@ public final class ScheduledInput {
         return dimension;
     }
 
-    /** Sets the value before the first ramp, SI. */
-    public void setInitial(double value) {
-        this.initial = value;
-        rebuild();
-    }
-
-    /** @return the value before the first ramp, SI */
-    public double initial() {
-        return initial;
-    }
-
     /** Adds a ramp; ramps are applied in start-time order and must not overlap (checked by the reader). */
     public void addRamp(Ramp ramp) {
         ramps.add(ramp);
         ramps.sort((a, b) -> Double.compare(a.start(), b.start()));
         rebuild();
-    }
-
-    /** @return the ramps in time order */
-    public List<Ramp> ramps() {
-        return Collections.unmodifiableList(ramps);
     }
 
     private void rebuild() {

@@ -55,7 +55,6 @@ public final class TravelLimitedMass {
     private EnergyAccount impact;
     private NetForce netForce;
     private Mode mode = Mode.FREE;
-    private int impacts;
 
     /**
      * @param owner id of the element it belongs to
@@ -132,11 +131,6 @@ public final class TravelLimitedMass {
         return mode;
     }
 
-    /** @return how many times the member has struck a stop */
-    public int impacts() {
-        return impacts;
-    }
-
     /** @return the position state (for diagnostics) */
     public StateSlot positionSlot() {
         return x;
@@ -182,7 +176,6 @@ public final class TravelLimitedMass {
         } else {
             mode = Mode.FREE;
         }
-        impacts = 0;
     }
 
     /** The event of one stop: reaching it while free, or leaving it while held. */
@@ -234,7 +227,6 @@ public final class TravelLimitedMass {
                 s.set(x, isLower ? lower : upper);
                 s.set(v, 0.0);
                 mode = held;
-                impacts++;
                 return Response.STATE_CHANGED;
             }
             if (mode == held && increasing) {

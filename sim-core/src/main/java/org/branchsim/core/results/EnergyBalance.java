@@ -1,6 +1,5 @@
 package org.branchsim.core.results;
 
-import java.util.LinkedHashMap;
 import java.util.Map;
 import org.branchsim.core.model.EnergyAccount;
 
@@ -41,16 +40,5 @@ public record EnergyBalance(Map<String, Double> accounts, Map<String, EnergyAcco
             return largest == 0.0 ? 0.0 : Math.abs(residual()) / largest;
         }
         return Math.abs(residual()) / supply;
-    }
-
-    /** @return the accounts whose names start with a prefix (an element id plus '.'), J */
-    public Map<String, Double> accountsOf(String prefix) {
-        Map<String, Double> out = new LinkedHashMap<>();
-        accounts.forEach((k, v) -> {
-            if (k.startsWith(prefix)) {
-                out.put(k, v);
-            }
-        });
-        return out;
     }
 }

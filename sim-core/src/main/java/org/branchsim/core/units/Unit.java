@@ -19,9 +19,4 @@ public record Unit(String symbol, Dimension dimension, double factor, double off
     public double fromSi(double si) {
         return (si - offset) / factor;
     }
-
-    /** @return the SI value of a difference (interval) expressed in this unit; the offset does not apply */
-    public double intervalToSi(double value) {
-        return value * factor;
-    }
 }
