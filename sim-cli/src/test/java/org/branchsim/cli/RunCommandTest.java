@@ -106,6 +106,7 @@ class RunCommandTest {
         Outcome o = run("run", limited.toString(), "--out", dir.resolve("out").toString());
         assertEquals(1, o.code(), o.err());
         assertTrue(o.err().contains("step size fell below the minimum"), o.err());
+        assertTrue(o.err().contains("largest error in state pumpLine.p"), o.err());
         assertTrue(o.err().contains("at t = ") && o.err().contains("pumpLine.p"), o.err());
         assertFalse(Files.exists(dir.resolve("out")));
     }

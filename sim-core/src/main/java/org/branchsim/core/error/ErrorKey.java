@@ -15,7 +15,7 @@ public enum ErrorKey {
     /** The integrator produced NaN or infinity in a state. */
     NAN_IN_STATE(false, "the solution became non-finite at t = {0} s in state {1} (value {2}); last good states: {3}"),
     /** The integrator could not keep the error below tolerance with the smallest allowed step. */
-    STEP_UNDERFLOW(false, "the step size fell below the minimum {0} s at t = {1} s; states {2}"),
+    STEP_UNDERFLOW(false, "the step size fell below the minimum {0} s at t = {1} s; {2}"),
     /** The integrator exceeded the allowed number of derivative evaluations. */
     TOO_MANY_EVALUATIONS(false, "more than {0} derivative evaluations were needed; stopped at t = {1} s; states: {2}"),
     /** Any other failure of the solver library, with its own message. */

@@ -52,6 +52,15 @@ final class IntegratorFactory {
         return 0;
     }
 
+    /** @return the name of the state with the largest error in the last step tried, when the method knows it */
+    static String worstState(AdaptiveStepsizeIntegrator integrator, Circuit circuit) {
+        if (integrator instanceof RosenbrockIntegrator r && r.worstComponent() >= 0
+                && r.worstComponent() < circuit.dimension()) {
+            return circuit.states().get(r.worstComponent()).name();
+        }
+        return null;
+    }
+
     static long jacobians(AdaptiveStepsizeIntegrator integrator) {
         return integrator instanceof RosenbrockIntegrator r ? r.jacobianEvaluations() : 0;
     }

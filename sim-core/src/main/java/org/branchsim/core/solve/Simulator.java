@@ -87,7 +87,7 @@ public final class Simulator {
         } catch (BranchsimException e) {
             throw e;
         } catch (MathIllegalArgumentException | MathIllegalStateException e) {
-            throw translate(e, settings, reporter);
+            throw translate(e, settings, reporter, IntegratorFactory.worstState(integrator, circuit));
         } catch (MathRuntimeException e) {
             throw new BranchsimException(ErrorKey.SOLVER_FAILED, List.of(), e,
                     reporter.time(reporter.lastTime()), e.getMessage(), reporter.describeLastGood());
@@ -118,13 +118,18 @@ public final class Simulator {
         return new EnergyBalance(totals, kinds);
     }
 
-    private static BranchsimException translate(RuntimeException e, SolverSettings settings, FailureReporter reporter) {
+    private static BranchsimException translate(RuntimeException e, SolverSettings settings, FailureReporter reporter,
+                                                String worstState) {
         Object specifier = e instanceof MathIllegalArgumentException mia ? mia.getSpecifier()
                 : ((MathIllegalStateException) e).getSpecifier();
         String t = reporter.time(reporter.lastTime());
         if (specifier == LocalizedODEFormats.MINIMAL_STEPSIZE_REACHED_DURING_INTEGRATION) {
+            String states = reporter.describeLastGood();
+            if (worstState != null) {
+                states = "largest error in state " + worstState + "; " + states;
+            }
             return new BranchsimException(ErrorKey.STEP_UNDERFLOW, List.of(), e,
-                    Double.toString(settings.minStep()), t, reporter.describeLastGood());
+                    Double.toString(settings.minStep()), t, states);
         }
         if (specifier == LocalizedCoreFormats.MAX_COUNT_EXCEEDED) {
             return new BranchsimException(ErrorKey.TOO_MANY_EVALUATIONS, List.of(), e,

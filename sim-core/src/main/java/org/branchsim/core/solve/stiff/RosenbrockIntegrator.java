@@ -56,6 +56,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     private long rejected;
     private long jacobians;
     private long factorisations;
+    private int worstComponent = -1;
 
     /**
      * @param minStep smallest step, s
@@ -93,6 +94,11 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     /** @return Jacobian evaluations in the last integration */
     public long jacobianEvaluations() {
         return jacobians;
+    }
+
+    /** @return index of the state with the largest scaled error in the last step tried (-1 before any) */
+    public int worstComponent() {
+        return worstComponent;
     }
 
     /** @return LU factorisations in the last integration */
@@ -233,6 +239,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         }
         lu.solve(k4);
         double sum = 0.0;
+        double worst = -1.0;
         int main = getStepSizeHelper().getMainSetDimension();
         for (int i = 0; i < n; i++) {
             y1[i] = y[i] + M1 * k1[i] + M3 * k3[i] + M4 * k4[i];
@@ -240,6 +247,10 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
                 double tol = getStepSizeHelper().getTolerance(i, FastMath.max(FastMath.abs(y[i]), FastMath.abs(y1[i])));
                 double r = k4[i] / tol;
                 sum += r * r;
+                if (!(Math.abs(r) <= worst)) {
+                    worst = Math.abs(r);
+                    worstComponent = i;
+                }
             }
         }
         double err = FastMath.sqrt(sum / main);
