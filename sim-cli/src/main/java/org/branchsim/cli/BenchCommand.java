@@ -157,8 +157,8 @@ public final class BenchCommand implements Callable<Integer> {
                 o.put("jacobians", st.jacobians());
                 o.put("luFactorisations", st.factorisations());
                 o.put("events", st.totalEvents());
-                putNumber(o, "maxPressureErrorOverRange", err);
-                putNumber(o, "eventTimeMaxDifference_s", eventDiff);
+                MetricsReport.putFinite(o, "maxPressureErrorOverRange", err);
+                MetricsReport.putFinite(o, "eventTimeMaxDifference_s", eventDiff);
                 o.put("peakHeap_MB", heap);
                 csv.append(String.format(Locale.ROOT, "%s,%s,%g,%.6f,%.6f,%.6f,%.1f,%d,%d,%d,%d,%d,%d,%s,%s,%.1f%n",
                         base.name(), m.name().toLowerCase(Locale.ROOT), s.endTime(), median, walls[0],
@@ -222,14 +222,6 @@ public final class BenchCommand implements Callable<Integer> {
             throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--end-time: expected a positive time such as \"10 s\", found \"" + text + "\"");
         }
         return p.si();
-    }
-
-    private static void putNumber(ObjectNode o, String key, double v) {
-        if (Double.isFinite(v)) {
-            o.put(key, v);
-        } else {
-            o.putNull(key);
-        }
     }
 
     /** Peak heap during one run, MB: pools' peaks reset after a GC, read after the run (includes garbage). */

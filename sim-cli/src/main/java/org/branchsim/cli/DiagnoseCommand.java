@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.ReducingValveMetrics;
+import org.branchsim.core.elements.ReducingValve;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.study.Diagnosis;
 import org.branchsim.core.units.Unit;
@@ -76,15 +77,11 @@ public final class DiagnoseCommand implements Callable<Integer> {
     }
 
     private static String outletOf(Diagnosis.Report r) {
-        return r.baseline().circuit().elements().stream()
-                .filter(e -> e instanceof org.branchsim.core.elements.ReducingValve)
-                .map(e -> ((org.branchsim.core.elements.ReducingValve) e).outletPressureSignal())
-                .findFirst().orElse(null);
+        return ReducingValve.firstOutletSignal(r.baseline().circuit()).orElse(null);
     }
 
     static String describe(OscillationFinding f, UnitSystem units) {
-        Unit u = units.displayUnit(f.dominant().signal().endsWith(".x")
-                ? org.branchsim.core.units.Dimension.LENGTH : org.branchsim.core.units.Dimension.PRESSURE);
+        Unit u = units.displayUnit(f.dominantDimension());
         String what = f.kind() == OscillationFinding.Kind.CHATTER
                 ? String.format(Locale.ROOT, "chatter: %s strikes its seat or stop %.0f times a second", f.impactingMember(),
                         f.impactsPerSecond())

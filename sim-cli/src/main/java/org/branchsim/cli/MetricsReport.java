@@ -105,8 +105,7 @@ public final class MetricsReport {
         o.put("frequency_Hz", round(f.frequency()));
         o.put("trend", f.trend().label());
         o.put("growthRate_1_per_s", round(f.growthRate()));
-        Dimension d = f.dominant().signal().endsWith(".x") ? Dimension.LENGTH : Dimension.PRESSURE;
-        Unit u = units.displayUnit(d);
+        Unit u = units.displayUnit(f.dominantDimension());
         o.put("dominantSignal", f.dominant().signal());
         o.put("amplitudeUnit", u.symbol());
         o.put("amplitudeAtEnd", round(u.fromSi(f.dominant().endAmplitude()) - u.fromSi(0.0)));
@@ -122,8 +121,13 @@ public final class MetricsReport {
     }
 
     private static void putNumber(ObjectNode o, String key, double v) {
+        putFinite(o, key, round(v));
+    }
+
+    /** Puts a number, or null when it is not finite (JSON has no NaN). */
+    static void putFinite(ObjectNode o, String key, double v) {
         if (Double.isFinite(v)) {
-            o.put(key, round(v));
+            o.put(key, v);
         } else {
             o.putNull(key);
         }

@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.branchsim.core.elements.ReducingValve;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.scenario.Scenario;
@@ -112,10 +113,8 @@ public final class SweepCommand implements Callable<Integer> {
             }
             return signals;
         }
-        return List.of(base.circuit().elements().stream()
-                .filter(e -> e instanceof org.branchsim.core.elements.ReducingValve)
-                .map(e -> ((org.branchsim.core.elements.ReducingValve) e).outletPressureSignal())
-                .findFirst().orElse(base.circuit().nodes().stream().filter(nd -> !nd.isTank())
+        return List.of(ReducingValve.firstOutletSignal(base.circuit())
+                .orElse(base.circuit().nodes().stream().filter(nd -> !nd.isTank())
                         .map(nd -> nd.id() + ".p").findFirst().orElse(base.circuit().signals().get(0).name())));
     }
 

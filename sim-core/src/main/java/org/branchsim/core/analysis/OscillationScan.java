@@ -54,6 +54,7 @@ public final class OscillationScan {
         double[] t = trace.times();
         List<Oscillation> found = new ArrayList<>();
         Map<Oscillation, Double> strength = new LinkedHashMap<>();
+        Map<Oscillation, Dimension> dimensions = new LinkedHashMap<>();
         for (int i = 0; i < trace.columns().size(); i++) {
             Trace.Column c = trace.columns().get(i);
             if (c.dimension() != Dimension.PRESSURE && c.dimension() != Dimension.LENGTH) {
@@ -65,6 +66,7 @@ public final class OscillationScan {
             if (o != null) {
                 found.add(o);
                 strength.put(o, o.endAmplitude() / threshold);
+                dimensions.put(o, c.dimension());
             }
         }
         found.sort(Comparator.comparingDouble((Oscillation o) -> strength.get(o)).reversed());
@@ -85,12 +87,13 @@ public final class OscillationScan {
             home.add(o);
         }
         for (List<Oscillation> g : groups) {
-            findings.add(finding(g, result.events(), from, to));
+            findings.add(finding(g, dimensions.get(g.get(0)), result.events(), from, to));
         }
         return findings;
     }
 
-    private static OscillationFinding finding(List<Oscillation> group, List<EventRecord> events, double from, double to) {
+    private static OscillationFinding finding(List<Oscillation> group, Dimension dimension, List<EventRecord> events,
+                                              double from, double to) {
         Oscillation dominant = group.get(0);
         Set<String> elements = new LinkedHashSet<>();
         for (Oscillation o : group) {
@@ -113,7 +116,7 @@ public final class OscillationScan {
         }
         boolean chatter = most >= CHATTER_IMPACTS;
         return new OscillationFinding(chatter ? OscillationFinding.Kind.CHATTER : OscillationFinding.Kind.HUNTING,
-                dominant.frequency(), dominant.trend(), dominant.growthRate(), dominant, List.copyOf(elements),
+                dominant.frequency(), dominant.trend(), dominant.growthRate(), dominant, dimension, List.copyOf(elements),
                 List.copyOf(group), chatter ? member : null, chatter ? most / (to - from) : 0.0);
     }
 

@@ -35,4 +35,10 @@ public interface ReducingValve {
     default String mainFlowSignal() {
         return id() + ".q";
     }
+
+    /** @return the outlet pressure signal of the circuit's first reducing valve, if it has one */
+    static java.util.Optional<String> firstOutletSignal(org.branchsim.core.model.Circuit circuit) {
+        return circuit.elements().stream().filter(e -> e instanceof ReducingValve)
+                .map(e -> ((ReducingValve) e).outletPressureSignal()).findFirst();
+    }
 }
