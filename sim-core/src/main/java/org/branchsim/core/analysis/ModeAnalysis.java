@@ -104,8 +104,8 @@ public final class ModeAnalysis {
         return modes;
     }
 
-    /** @return the element or node a state belongs to: its name up to the first dot */
-    static String owner(String stateName) {
+    /** @return the element or node a state or member belongs to: its name up to the first dot */
+    public static String owner(String stateName) {
         int dot = stateName.indexOf('.');
         return dot < 0 ? stateName : stateName.substring(0, dot);
     }

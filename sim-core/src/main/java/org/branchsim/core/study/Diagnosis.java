@@ -87,7 +87,7 @@ public final class Diagnosis {
                 .orElse(null);
         Set<String> parts = new LinkedHashSet<>();
         if (main.impactingMember() != null) {
-            parts.add(ModeAnalysisOwner.of(main.impactingMember()));
+            parts.add(ModeAnalysis.owner(main.impactingMember()));
         }
         if (nearest != null) {
             nearest.elements().stream().filter(s -> s.share() >= PART_SHARE).forEach(s -> parts.add(s.name()));
@@ -125,13 +125,5 @@ public final class Diagnosis {
     private static ReducingValveMetrics firstValve(SimulationResult r, Scenario s) {
         List<ReducingValveMetrics> list = ReducingValveMetrics.of(r, s.metricsFrom(), s.metricsTo());
         return list.isEmpty() ? null : list.get(0);
-    }
-
-    /** Element id of a member name such as "prv.pilot". */
-    private static final class ModeAnalysisOwner {
-        static String of(String member) {
-            int dot = member.indexOf('.');
-            return dot < 0 ? member : member.substring(0, dot);
-        }
     }
 }
