@@ -11,7 +11,7 @@ import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** sweep, tolerance and modes through the command line. */
+/** sweep, tolerance, diagnose and bench through the command line (modes: {@link ModesCommandTest}). */
 class StudyCommandsTest {
 
     private static final String FEED = RunCommandTest.SCENARIOS.resolve("feed-stall.json").toString();
@@ -60,16 +60,6 @@ class StudyCommandsTest {
         try (var files = Files.list(dir.resolve("a"))) {
             assertTrue(files.anyMatch(p -> p.getFileName().toString().startsWith("histogram-")));
         }
-    }
-
-    @Test
-    void modesListsAndFlagsModes(@TempDir Path dir) {
-        RunCommandTest.Outcome o = RunCommandTest.run("modes", FEED, "--at", "0.8 s", "--out", dir.toString());
-        assertEquals(0, o.code(), o.err());
-        assertTrue(o.out().contains("linearised at t = 0.8 s"), o.out());
-        assertTrue(o.out().contains("feed"), o.out());
-        assertTrue(Files.exists(dir.resolve("modes.csv")));
-        assertEquals(2, RunCommandTest.run("modes", FEED, "--at", "soon").code());
     }
 
     @Test

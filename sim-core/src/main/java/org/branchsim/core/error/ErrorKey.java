@@ -20,6 +20,12 @@ public enum ErrorKey {
     TOO_MANY_EVALUATIONS(false, "more than {0} derivative evaluations were needed; stopped at t = {1} s; states: {2}"),
     /** Any other failure of the solver library, with its own message. */
     SOLVER_FAILED(false, "the solver failed at t = {0} s: {1}; states: {2}"),
+    /**
+     * No operating point (f(y) = 0 with members held where they are held) was found at a time: the circuit is
+     * still moving there, or the Newton solve did not converge. A property of the circuit at that time, so a
+     * run-time failure (exit code 1), not an input error.
+     */
+    NO_OPERATING_POINT(false, "no operating point at t = {0} s: {1}; states changing most {2}{3}"),
     /** Writing an output file failed. */
     OUTPUT_FAILED(false, "cannot write output {0}: {1}");
 

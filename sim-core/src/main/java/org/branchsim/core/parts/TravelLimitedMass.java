@@ -141,6 +141,47 @@ public final class TravelLimitedMass {
         return v;
     }
 
+    /** @return the member's id, {@code <owner>.<name>}, e.g. {@code prv.spool} (the prefix of its states) */
+    public String id() {
+        return owner + "." + name;
+    }
+
+    /** @return the position of the stop a mode holds the member at, m (NaN for {@link Mode#FREE}) */
+    public double stopPosition(Mode held) {
+        return switch (held) {
+            case AT_LOWER_STOP -> lower;
+            case AT_UPPER_STOP -> upper;
+            case FREE -> Double.NaN;
+        };
+    }
+
+    /**
+     * Sets the mode directly, without an event. For operating-point solves only: the caller must put the
+     * state at the stop ({@link #stopPosition}, velocity zero) when it holds the member. During a run the
+     * mode changes only through the stop events.
+     */
+    public void hold(Mode newMode) {
+        this.mode = newMode;
+    }
+
+    /**
+     * The release rule of the stop events, for operating-point solves: a member held at its lower stop leaves
+     * it when the net force exceeds {@link #RELEASE_FORCE}, one at its upper stop when the net force is below
+     * minus that.
+     *
+     * @param s state
+     * @return true when the member is held and the net force at {@code s} pulls it off its stop
+     */
+    public boolean pulledOffStop(StateView s) {
+        double f = netForce.at(s);
+        return mode == Mode.AT_LOWER_STOP && f > RELEASE_FORCE || mode == Mode.AT_UPPER_STOP && -f > RELEASE_FORCE;
+    }
+
+    /** @return the net force on the member at {@code s}, N, positive towards the upper stop */
+    public double netForce(StateView s) {
+        return netForce.at(s);
+    }
+
     /**
      * Applies the forces: sets dx/dt and dv/dt (zero while held), records signals and books the power of
      * each force. {@code forces.external} is not booked here; its owner books it.

@@ -81,7 +81,7 @@ public final class Diagnosis {
         }
         OscillationFinding main = findings.get(0);
         double end = baseline.trace().time(baseline.trace().size() - 1);
-        List<Mode> modes = ModeAnalysis.at(baseline.circuit(), end, baseline.finalState());
+        List<Mode> modes = ModeAnalysis.onTrajectory(baseline.circuit(), end, baseline.finalState());
         Mode nearest = modes.stream().filter(Mode::oscillatory)
                 .min(Comparator.comparingDouble(m -> Math.abs(Math.log(m.naturalFrequency() / main.frequency()))))
                 .orElse(null);
