@@ -1,19 +1,20 @@
 package org.branchsim.cli;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.branchsim.core.analysis.OscillationFinding;
-import org.branchsim.core.analysis.ReducingValveMetrics;
+import org.branchsim.core.analysis.ScanWindow;
 import org.branchsim.core.elements.ReducingValve;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.study.Diagnosis;
-import org.branchsim.core.units.Unit;
-import org.branchsim.core.units.UnitSystem;
+import org.branchsim.core.units.Dimension;
+import org.branchsim.core.units.Quantity;
 import org.branchsim.plots.TraceCharts;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -21,20 +22,38 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
- * {@code branchsim diagnose SCENARIO}: finds hunting or chatter, names the part that oscillates and its
- * mode, tries the usual remedies on the parts that take part and reports, in plain words, which cure it
- * and at what cost, with before/after figures.
+ * {@code branchsim diagnose SCENARIO}: finds hunting or chatter, ties each oscillation to its mode at the operating
+ * point and names its parts, finds on the linear model the changes that damp it with margin, confirms them in the
+ * time domain, and recommends the one that costs the job least, with before/after figures.
  */
 @Command(name = "diagnose", mixinStandardHelpOptions = true,
-        description = "Find hunting or chatter, name the part that oscillates, try the usual remedies on it and "
-                + "report which cure it and what each costs in overshoot and settling, with before/after figures.")
+        description = "Find hunting or chatter, name the parts that oscillate, find the changes that damp it with "
+                + "margin (linear model at the operating point, confirmed by a run) and recommend one, with "
+                + "before/after figures.")
 public final class DiagnoseCommand implements Callable<Integer> {
+
+    /** Cycles shown in the zoomed before/after figures. */
+    static final int ZOOM_CYCLES = 6;
 
     @Mixin
     private ScenarioArgument scenario;
 
     @Option(names = "--threads", paramLabel = "N", description = "Threads for the remedy runs (default: all cores).")
     private Integer threads;
+
+    @Option(names = "--margin", paramLabel = "ZETA",
+            description = "Damping ratio every mode of the oscillation must reach for a change to count as a cure "
+                    + "(default: ${DEFAULT-VALUE}).", defaultValue = "0.05")
+    private double margin;
+
+    @Option(names = "--window", paramLabel = "FROM..TO",
+            description = "Scan only this stretch of the run, e.g. \"0.4 s..0.6 s\" (default: the later half of "
+                    + "every interval between schedule changes).")
+    private String window;
+
+    @Option(names = "--on-trajectory",
+            description = "When the circuit has no operating point, list modes about the simulated state instead.")
+    private boolean onTrajectory;
 
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/<scenario name>-diagnosis).")
     private Path out;
@@ -44,31 +63,29 @@ public final class DiagnoseCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (!(margin > 0.0 && margin < 1.0)) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT,
+                    "--margin: expected a damping ratio between 0 and 1 (exclusive), found " + margin);
+        }
+        if (threads != null && threads < 1) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--threads: expected at least 1, found " + threads);
+        }
         Scenario s = scenario.load();
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : Math.max(1, threads);
+        ScanWindow given = window == null ? null : parseWindow(window, s.solver().endTime());
+        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
-        Diagnosis.Report r = Diagnosis.run(s, n, done -> SweepCommand.progress(err, done, -1, start));
+        Diagnosis.Report r = Diagnosis.run(s, new Diagnosis.Options(margin, given, onTrajectory, n),
+                done -> SweepCommand.progress(err, done, -1, start));
         err.println();
-        String text = text(r);
+        String text = DiagnosisText.text(r);
         OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-diagnosis"));
         folder.writeText("diagnosis.txt", text);
-        folder.writeText("diagnosis.json", MetricsReport.toJson(json(r)));
-        if (!r.findings().isEmpty()) {
-            String signal = r.findings().get(0).dominant().signal();
-            Diagnosis.Trial best = r.recommended();
-            List<TraceCharts.Labelled> runs = best == null
-                    ? List.of(new TraceCharts.Labelled("as is", r.baseline().trace()))
-                    : List.of(new TraceCharts.Labelled("as is", r.baseline().trace()),
-                            new TraceCharts.Labelled("with " + best.remedy().change(), best.outcome().result().trace()));
-            folder.write("before-after-" + FigureSet.slug(signal) + ".png",
-                    p -> TraceCharts.compare(runs, signal, s.name() + ": before and after", s.units(), p));
-            for (String other : List.of(outletOf(r))) {
-                if (other != null && !other.equals(signal)) {
-                    folder.write("before-after-" + FigureSet.slug(other) + ".png",
-                            p -> TraceCharts.compare(runs, other, s.name() + ": before and after", s.units(), p));
-                }
-            }
+        folder.writeText("diagnosis.json", MetricsReport.toJson(DiagnosisJson.of(r)));
+        int k = 0;
+        for (Diagnosis.FindingDiagnosis d : r.diagnosed()) {
+            k++;
+            figures(folder, s, r, d, k);
         }
         PrintWriter w = spec.commandLine().getOut();
         w.print(text);
@@ -76,120 +93,51 @@ public final class DiagnoseCommand implements Callable<Integer> {
         return BranchsimMain.OK;
     }
 
-    private static String outletOf(Diagnosis.Report r) {
-        return ReducingValve.firstOutletSignal(r.baseline().circuit()).orElse(null);
-    }
-
-    static String describe(OscillationFinding f, UnitSystem units) {
-        Unit u = units.displayUnit(f.dominantDimension());
-        String what = f.kind() == OscillationFinding.Kind.CHATTER
-                ? String.format(Locale.ROOT, "chatter: %s strikes its seat or stop %.0f times a second", f.impactingMember(),
-                        f.impactsPerSecond())
-                : "hunting (no seat impacts)";
-        return String.format(Locale.ROOT, "%s at %.1f Hz, %s; strongest in %s (amplitude %.3g %s); parts: %s", what,
-                f.frequency(), f.trend().label(), f.dominant().signal(), u.fromSi(f.dominant().endAmplitude()) - u.fromSi(0),
-                u.symbol(), String.join(", ", f.elements()));
-    }
-
-    private static String cost(ReducingValveMetrics m) {
-        if (m == null) {
-            return "";
+    /** Before/after figures of one finding: the whole interval, and a zoom on its last few cycles. */
+    private static void figures(OutputFolder folder, Scenario s, Diagnosis.Report r, Diagnosis.FindingDiagnosis d,
+                                int k) {
+        OscillationFinding f = d.finding();
+        List<TraceCharts.Labelled> runs = new ArrayList<>();
+        runs.add(new TraceCharts.Labelled("as is", r.baseline().trace()));
+        Diagnosis.Trial best = d.recommended();
+        if (best != null) {
+            runs.add(new TraceCharts.Labelled("with " + best.value() + " (" + best.linear().knob().path() + ")",
+                    best.outcome().result().trace()));
         }
-        return String.format(Locale.ROOT, "overshoot %.1f %% of setting, %s", m.overshootPercent(),
-                Double.isFinite(m.settlingTime()) ? String.format(Locale.ROOT, "settles in %.3f s", m.settlingTime())
-                        : "does not settle into +-2 %");
-    }
-
-    static String text(Diagnosis.Report r) {
-        StringBuilder sb = new StringBuilder();
-        String nl = System.lineSeparator();
-        Scenario s = r.scenario();
-        sb.append("branchsim diagnose: ").append(s.name()).append(" (").append(s.file()).append(')').append(nl);
-        if (r.findings().isEmpty()) {
-            sb.append("No sustained oscillation after the transients: no hunting or chatter found.").append(nl);
-            sb.append(Cautions.FULL).append(nl);
-            return sb.toString();
-        }
-        sb.append("Found:").append(nl);
-        for (OscillationFinding f : r.findings()) {
-            sb.append("  - ").append(describe(f, s.units())).append(nl);
-        }
-        if (r.mode() != null) {
-            sb.append(String.format(Locale.ROOT, "Nearest linearised mode (at the end of the run): %.1f Hz, damping ratio %.3f%s; "
-                    + "it lives mostly in %s.%n", r.mode().naturalFrequency(), r.mode().dampingRatio(),
-                    r.mode().dampingRatio() < 0 ? " (unstable)" : r.mode().lightlyDamped() ? " (lightly damped)" : "",
-                    r.mode().elements().stream().map(e -> String.format(Locale.ROOT, "%s (%.0f %%)", e.name(), 100 * e.share()))
-                            .reduce((a, b) -> a + ", " + b).orElse("-")));
-        }
-        if (r.baselineMetrics() != null) {
-            sb.append("As it is: ").append(cost(r.baselineMetrics())).append('.').append(nl);
-        }
-        sb.append("Remedies tried on ").append(String.join(", ", r.parts())).append(':').append(nl);
-        for (Diagnosis.Trial t : r.trials()) {
-            String result;
-            if (!t.outcome().ok()) {
-                result = "the run failed: " + t.outcome().error();
-            } else if (t.cures()) {
-                result = "REMOVES the oscillation; " + cost(t.metrics());
-            } else {
-                OscillationFinding left = t.remaining().get(0);
-                result = String.format(Locale.ROOT, "does not cure it (%s remains at %.1f Hz)", left.kind().label(), left.frequency());
+        List<String> signals = new ArrayList<>();
+        signals.add(f.dominant().signal());
+        ReducingValve.firstOutletSignal(r.baseline().circuit()).ifPresent(o -> {
+            if (!signals.contains(o)) {
+                signals.add(o);
             }
-            sb.append(String.format(Locale.ROOT, "  - %s (%s): %s%n", t.remedy().change(), t.remedy().what(), result));
+        });
+        ScanWindow w = f.window();
+        double zoomFrom = Math.max(w.changeEnd(), w.to() - ZOOM_CYCLES / f.frequency());
+        for (String signal : signals) {
+            String slug = FigureSet.slug(signal);
+            String title = String.format(Locale.ROOT, "%s, finding %d (%s at %.1f Hz): before and after", s.name(), k,
+                    f.kind().label(), f.frequency());
+            folder.write("finding" + k + "-" + slug + "-interval.png",
+                    p -> TraceCharts.compare(runs, signal, title, s.units(), p, w.changeEnd(), w.to()));
+            folder.write("finding" + k + "-" + slug + "-cycles.png",
+                    p -> TraceCharts.compare(runs, signal, title + ", last " + ZOOM_CYCLES + " cycles", s.units(), p,
+                            zoomFrom, w.to()));
         }
-        if (r.recommended() != null) {
-            Diagnosis.Trial b = r.recommended();
-            sb.append(String.format(Locale.ROOT, "Recommended: change %s from %s to %s (%s). With it: %s.%n",
-                    b.remedy().path(), b.remedy().from(), b.remedy().to(), b.remedy().what(), cost(b.metrics())));
-            sb.append("Check the change on the machine before relying on it.").append(nl);
-        } else {
-            sb.append("None of the single changes tried removes the oscillation; try combinations with 'branchsim sweep'.")
-                    .append(nl);
-        }
-        sb.append(Cautions.FULL).append(nl);
-        return sb.toString();
     }
 
-    private static ObjectNode json(Diagnosis.Report r) {
-        ObjectNode root = MetricsReport.mapper().createObjectNode();
-        root.put("scenario", r.scenario().name());
-        root.put("caution", Cautions.SHORT);
-        ArrayNode found = root.putArray("oscillations");
-        for (OscillationFinding f : r.findings()) {
-            found.add(MetricsReport.finding(f, r.scenario().units()));
+    /** Parses "FROM..TO" (two times with units) into a window inside the run. */
+    static ScanWindow parseWindow(String text, double endTime) {
+        String[] ends = text.split("\\.\\.", -1);
+        String expected = "--window: expected two times with units inside the run (0 to "
+                + org.branchsim.core.study.ValueText.format(endTime) + " s), e.g. \"0.4 s..0.6 s\", found \"" + text + "\"";
+        if (ends.length != 2) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, expected);
         }
-        if (r.mode() != null) {
-            ObjectNode m = root.putObject("nearestMode");
-            m.put("naturalFrequency_Hz", r.mode().naturalFrequency());
-            m.put("dampingRatio", r.mode().dampingRatio());
-            ObjectNode e = m.putObject("elements");
-            r.mode().elements().forEach(sh -> e.put(sh.name(), sh.share()));
+        Quantity.Parsed a = Quantity.parse(ends[0].trim(), Dimension.TIME);
+        Quantity.Parsed b = Quantity.parse(ends[1].trim(), Dimension.TIME);
+        if (!a.ok() || !b.ok() || !(a.si() >= 0.0) || !(b.si() > a.si()) || b.si() > endTime) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, expected);
         }
-        ArrayNode trials = root.putArray("remedies");
-        for (Diagnosis.Trial t : r.trials()) {
-            ObjectNode o = trials.addObject();
-            o.put("path", t.remedy().path());
-            o.put("from", t.remedy().from());
-            o.put("to", String.valueOf(t.remedy().to()));
-            o.put("what", t.remedy().what());
-            o.put("cures", t.cures());
-            if (!t.outcome().ok()) {
-                o.put("error", t.outcome().error());
-            }
-            if (t.metrics() != null) {
-                o.put("overshootPercentOfSetting", MetricsReport.round(t.metrics().overshootPercent()));
-                if (Double.isFinite(t.metrics().settlingTime())) {
-                    o.put("settlingTime_s", MetricsReport.round(t.metrics().settlingTime()));
-                } else {
-                    o.putNull("settlingTime_s");
-                }
-            }
-        }
-        if (r.recommended() != null) {
-            root.put("recommended", r.recommended().remedy().change());
-        } else {
-            root.putNull("recommended");
-        }
-        return root;
+        return ScanWindow.given(a.si(), b.si());
     }
 }

@@ -60,7 +60,7 @@ public final class MetricsReport {
         root.set("reducingValves", reducingValves(valves, units, scenario.metricsFrom(), scenario.metricsTo()));
         ArrayNode osc = root.putArray("oscillations");
         for (OscillationFinding f : oscillations) {
-            osc.add(finding(f, units));
+            osc.add(DiagnosisJson.finding(f, units));
         }
         root.set("energy", energy(result.energy(), units));
         root.set("solver", solver(result.statistics()));
@@ -90,34 +90,16 @@ public final class MetricsReport {
             o.put("deviationPercentOfSetting", round(m.deviationPercent()));
             o.put("settlingBandPercentOfSetting", 100.0 * ReducingValveMetrics.BAND);
             o.put("settled", m.settled());
+            o.put("settlingBandCentredOn", "setting");
+            putNumber(o, "settlingMeasuredFrom_s", m.riseTime());
             putNumber(o, "settledAt_s", m.settledAt());
             putNumber(o, "settlingTime_s", m.settlingTime());
+            putNumber(o, "persistingOscillation_Hz", m.oscillationFrequency());
             o.put("steadyDrainFlow", round(q.fromSi(m.drainFlow())));
             o.put("steadyDrainPower", round(w.fromSi(m.drainPower())));
             o.put("steadyMeteringPower", round(w.fromSi(m.meteringPower())));
         }
         return arr;
-    }
-
-    static ObjectNode finding(OscillationFinding f, UnitSystem units) {
-        ObjectNode o = MAPPER.createObjectNode();
-        o.put("kind", f.kind().label());
-        o.put("frequency_Hz", round(f.frequency()));
-        o.put("trend", f.trend().label());
-        o.put("growthRate_1_per_s", round(f.growthRate()));
-        Unit u = units.displayUnit(f.dominantDimension());
-        o.put("dominantSignal", f.dominant().signal());
-        o.put("amplitudeUnit", u.symbol());
-        o.put("amplitudeAtEnd", round(u.fromSi(f.dominant().endAmplitude()) - u.fromSi(0.0)));
-        ArrayNode parts = o.putArray("parts");
-        f.elements().forEach(parts::add);
-        ArrayNode sig = o.putArray("signals");
-        f.signals().forEach(s -> sig.add(s.signal()));
-        if (f.impactingMember() != null) {
-            o.put("impactingMember", f.impactingMember());
-            o.put("impactsPerSecond", round(f.impactsPerSecond()));
-        }
-        return o;
     }
 
     private static void putNumber(ObjectNode o, String key, double v) {

@@ -42,8 +42,8 @@ public final class RunCommand implements Callable<Integer> {
         Scenario s = scenario.load();
         SimulationResult result = Simulator.run(s.circuit(), s.solver());
         OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name()));
-        List<ReducingValveMetrics> valves = ReducingValveMetrics.of(result, s.metricsFrom(), s.metricsTo());
         List<OscillationFinding> oscillations = OscillationScan.scan(result);
+        List<ReducingValveMetrics> valves = ReducingValveMetrics.of(result, s.metricsFrom(), s.metricsTo(), oscillations);
         String summary = summary(s, result, valves, oscillations);
         folder.writeText("trace.csv", TraceCsv.format(result.trace(), s.units()));
         folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
@@ -53,6 +53,21 @@ public final class RunCommand implements Callable<Integer> {
         w.print(summary);
         folder.report(w);
         return BranchsimMain.OK;
+    }
+
+    /** @return the settling result in words, saying what it is measured from and about what the band is centred */
+    static String settling(ReducingValveMetrics m) {
+        if (m.oscillating()) {
+            return String.format(Locale.ROOT, "does not settle: oscillates at %.1f Hz", m.oscillationFrequency());
+        }
+        if (!m.settled()) {
+            return "not inside +-2 % of the setting at the end of the window";
+        }
+        if (Double.isNaN(m.settlingTime())) {
+            return String.format(Locale.ROOT, "inside +-2 %% of the setting from %.3f s", m.settledAt());
+        }
+        return String.format(Locale.ROOT, "settles into +-2 %% of the setting %.3f s after its rise through 90 %% of "
+                + "the setting at %.3f s (inside from %.3f s)", m.settlingTime(), m.riseTime(), m.settledAt());
     }
 
     static String summary(Scenario s, SimulationResult r, List<ReducingValveMetrics> valves,
@@ -83,18 +98,15 @@ public final class RunCommand implements Callable<Integer> {
                             + "metering loss %.3g %s%n",
                     m.id(), s.metricsFrom(), s.metricsTo(), pu.fromSi(m.setting()), pu.symbol(), pu.fromSi(m.steady()),
                     m.deviationPercent(), pu.fromSi(m.peak()), m.peakTime(), pu.fromSi(m.overshoot()) - pu.fromSi(0),
-                    pu.symbol(), m.overshootPercent(),
-                    !m.settled() ? "not settled in +-2 % band"
-                            : Double.isNaN(m.settlingTime()) ? String.format(Locale.ROOT, "in +-2 %% band from %.3f s", m.settledAt())
-                            : String.format(Locale.ROOT, "settles in +-2 %% band in %.3f s (at %.3f s)", m.settlingTime(), m.settledAt()),
+                    pu.symbol(), m.overshootPercent(), settling(m),
                     qu.fromSi(m.drainFlow()), qu.symbol(), wu.fromSi(m.drainPower()), wu.symbol(),
                     wu.fromSi(m.meteringPower()), wu.symbol()));
         }
         if (osc.isEmpty()) {
-            sb.append("oscillation: none sustained after the transients").append(nl);
+            sb.append("oscillation: none in the later half of any interval between schedule changes").append(nl);
         }
         for (OscillationFinding f : osc) {
-            sb.append("oscillation: ").append(DiagnoseCommand.describe(f, s.units()))
+            sb.append("oscillation: ").append(DiagnosisText.describe(f, s.units()))
                     .append(" (try 'branchsim diagnose')").append(nl);
         }
         Unit eu = s.units().displayUnit(Dimension.ENERGY);

@@ -177,6 +177,23 @@ public final class TraceCharts {
      */
     public static void compare(List<Labelled> runs, String signal, String title, UnitSystem units, Path file)
             throws IOException {
+        compare(runs, signal, title, units, file, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * Draws one signal from several runs on one axis over a stretch of time only (a zoom on a few cycles).
+     *
+     * @param runs labelled traces (at least one; every one must have the signal)
+     * @param signal signal name
+     * @param title figure title
+     * @param units unit system for the axis
+     * @param file PNG to write
+     * @param from first time drawn, s
+     * @param to last time drawn, s
+     * @throws IOException when the file cannot be written
+     */
+    public static void compare(List<Labelled> runs, String signal, String title, UnitSystem units, Path file,
+                               double from, double to) throws IOException {
         if (runs.isEmpty()) {
             throw new IllegalArgumentException("no runs to compare");
         }
@@ -193,7 +210,9 @@ public final class TraceCharts {
             double[] t = r.trace().times();
             double[] v = r.trace().series(i);
             for (int k = 0; k < v.length; k++) {
-                series.add(t[k], u.fromSi(v[k]), false);
+                if (t[k] >= from && t[k] <= to) {
+                    series.add(t[k], u.fromSi(v[k]), false);
+                }
             }
             data.addSeries(series);
         }

@@ -5,6 +5,8 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.model.Circuit;
 import org.branchsim.core.model.StateSlot;
 import org.branchsim.core.solve.Linearisation;
@@ -12,6 +14,7 @@ import org.branchsim.core.solve.OperatingPoint;
 import org.branchsim.core.solve.OperatingPointSolver;
 import org.hipparchus.complex.Complex;
 import org.hipparchus.linear.Array2DRowRealMatrix;
+import org.hipparchus.exception.MathIllegalStateException;
 import org.hipparchus.linear.EigenDecompositionNonSymmetric;
 import org.hipparchus.linear.RealMatrix;
 
@@ -51,6 +54,14 @@ public final class ModeAnalysis {
     public static List<Mode> at(Circuit circuit, OperatingPoint point) {
         OperatingPointSolver.holdMembers(circuit, point.held());
         return of(Linearisation.of(circuit, point.time(), point.state()));
+    }
+
+    private static List<Mode> of(Linearisation lin) {
+        try {
+            return modesOf(lin);
+        } catch (MathIllegalStateException e) {
+            throw new BranchsimException(ErrorKey.MODES_FAILED, Double.toString(lin.time()), e.getMessage());
+        }
     }
 
     /**
@@ -104,7 +115,7 @@ public final class ModeAnalysis {
         return dot < 0 ? stateName : stateName.substring(0, dot);
     }
 
-    private static List<Mode> of(Linearisation lin) {
+    private static List<Mode> modesOf(Linearisation lin) {
         List<String> names = new ArrayList<>();
         for (StateSlot s : lin.states()) {
             names.add(s.name());
@@ -132,11 +143,21 @@ public final class ModeAnalysis {
             }
             norm = Math.max(norm, sum);
         }
-        RealMatrix m = new Array2DRowRealMatrix(a, true);
+
+        // balance first (a diagonal similarity D^-1 A D: same eigenvalues, better conditioned for the QR
+        // iteration); A's right eigenvectors are D v and its left ones w D^-1, so participation is unchanged
+        double[] d = Balancing.scales(a);
+        RealMatrix m = new Array2DRowRealMatrix(Balancing.apply(a, d), false);
         EigenDecompositionNonSymmetric eig = new EigenDecompositionNonSymmetric(m);
         Complex[] lambda = eig.getEigenvalues();
         RealMatrix v = eig.getV();
         RealMatrix w = eig.getVInv();
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                v.multiplyEntry(i, j, d[i]);
+                w.multiplyEntry(j, i, 1.0 / d[i]);
+            }
+        }
         List<Mode> modes = new ArrayList<>();
         for (int k = 0; k < n; k++) {
             double re = lambda[k].getReal();

@@ -1,6 +1,7 @@
 package org.branchsim.core.analysis;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
@@ -13,119 +14,207 @@ import org.branchsim.core.results.Trace;
 import org.branchsim.core.units.Dimension;
 
 /**
- * Looks for sustained oscillations in every pressure and position signal of a run after its transients,
- * groups the signals that oscillate at one frequency into findings, names the parts that take part, and
- * classifies each finding: chatter when a member strikes its seat or stop at least
- * {@link #CHATTER_IMPACTS} times in the window, hunting otherwise.
+ * Looks for sustained oscillations in a run: in every {@link ScanWindow} (by default the later half of each
+ * interval between schedule changes), the spectral {@link OscillationDetector} is run on every pressure, member
+ * position and shaft speed signal (signals that repeat another one exactly, such as a valve's port pressure and
+ * its node's pressure, are scanned once); the components of one window are grouped into physical oscillations
+ * (one fundamental and its harmonics), weaker groups of the same parts folded into the stronger
+ * ({@link #fold}); the same oscillation seen in several windows is one finding; and each
+ * finding is classified as chatter when a member strikes its seat or stop in at least half of the cycles, hunting
+ * otherwise.
  */
 public final class OscillationScan {
 
-    /** Impacts of one member in the window that make an oscillation chatter. */
-    public static final int CHATTER_IMPACTS = 3;
-    /** Fraction of the run, at its end, taken as "after the transients" when no window is given. */
-    public static final double DEFAULT_WINDOW_FRACTION = 0.4;
     /** Smallest pressure amplitude reported, Pa (0.02 bar). */
     public static final double PRESSURE_FLOOR = 2e3;
-    /** Pressure amplitude threshold as a fraction of the mean pressure. */
+    /** Pressure amplitude threshold as a fraction of the mean absolute pressure in the window. */
     public static final double PRESSURE_FRACTION = 0.002;
     /** Smallest position amplitude reported, m. */
     public static final double POSITION_FLOOR = 1e-7;
-    /** Position amplitude threshold as a fraction of the signal's largest magnitude in the run. */
-    public static final double POSITION_FRACTION = 0.005;
-    private static final double SAME_FREQUENCY = 0.05;
+    /** Position and speed amplitude threshold as a fraction of the signal's largest magnitude in the run. */
+    public static final double MOTION_FRACTION = 0.005;
+    /** Smallest shaft speed amplitude reported, rad/s. */
+    public static final double SPEED_FLOOR = 0.05;
+    /**
+     * Two findings in different windows are the same oscillation when the same member chatters in both (its
+     * frequency moves with the operating point), or when their fundamentals are within this ratio and their
+     * strongest signals belong to the same part (common practice, no source).
+     */
+    public static final double SAME_OSCILLATION_RATIO = 1.25;
+
+    /** Strength, relative to a stronger group sharing a part, below which a group is folded into it. */
+    public static final double WEAK_SHARE = 0.1;
 
     private OscillationScan() {
     }
 
-    /** Scans the last {@link #DEFAULT_WINDOW_FRACTION} of the run. */
+    /** Scans the default windows: the later half of each interval between schedule changes. */
     public static List<OscillationFinding> scan(SimulationResult result) {
-        double end = result.trace().time(result.trace().size() - 1);
-        return scan(result, end * (1 - DEFAULT_WINDOW_FRACTION), end);
+        Trace trace = result.trace();
+        double end = trace.time(trace.size() - 1);
+        return scan(result, ScanWindow.between(result.circuit().inputs(), end));
     }
 
     /**
      * @param result a run
-     * @param from window start, s
-     * @param to window end, s
+     * @param windows where to look
      * @return findings, strongest first
      */
-    public static List<OscillationFinding> scan(SimulationResult result, double from, double to) {
+    public static List<OscillationFinding> scan(SimulationResult result, List<ScanWindow> windows) {
         Trace trace = result.trace();
         double[] t = trace.times();
-        List<Oscillation> found = new ArrayList<>();
-        Map<Oscillation, Double> strength = new LinkedHashMap<>();
-        Map<Oscillation, Dimension> dimensions = new LinkedHashMap<>();
+        List<Integer> scanned = scannedColumns(trace);
+        List<OscillationFinding> all = new ArrayList<>();
+        for (ScanWindow w : windows) {
+            List<SignalSamples> signals = new ArrayList<>();
+            for (int i : scanned) {
+                Trace.Column c = trace.columns().get(i);
+                double[] x = trace.series(i);
+                signals.add(new SignalSamples(c.name(), c.dimension(), x, threshold(c.dimension(), t, x, w)));
+            }
+            for (List<OscillationGroup> family : fold(OscillationDetector.detect(t, signals, w.from(), w.to()))) {
+                all.add(finding(family, w, result.events()));
+            }
+        }
+        return merge(all);
+    }
+
+    private static List<Integer> scannedColumns(Trace trace) {
+        List<Integer> out = new ArrayList<>();
         for (int i = 0; i < trace.columns().size(); i++) {
-            Trace.Column c = trace.columns().get(i);
-            if (c.dimension() != Dimension.PRESSURE && c.dimension() != Dimension.LENGTH) {
+            Dimension d = trace.columns().get(i).dimension();
+            if (d != Dimension.PRESSURE && d != Dimension.LENGTH && d != Dimension.ROTATIONAL_SPEED) {
                 continue;
             }
             double[] x = trace.series(i);
-            double threshold = threshold(c.dimension(), t, x, from, to);
-            Oscillation o = OscillationDetector.detect(c.name(), t, x, from, to, threshold);
-            if (o != null) {
-                found.add(o);
-                strength.put(o, o.endAmplitude() / threshold);
-                dimensions.put(o, c.dimension());
+            boolean repeat = false;
+            for (int j : out) {
+                if (Arrays.equals(x, trace.series(j))) {
+                    repeat = true;
+                    break;
+                }
+            }
+            if (!repeat) {
+                out.add(i);
             }
         }
-        found.sort(Comparator.comparingDouble((Oscillation o) -> strength.get(o)).reversed());
-        List<OscillationFinding> findings = new ArrayList<>();
-        List<List<Oscillation>> groups = new ArrayList<>();
-        for (Oscillation o : found) {
-            List<Oscillation> home = null;
-            for (List<Oscillation> g : groups) {
-                if (Math.abs(g.get(0).frequency() - o.frequency()) <= SAME_FREQUENCY * g.get(0).frequency()) {
-                    home = g;
+        return out;
+    }
+
+    /**
+     * Folds the weaker groups of one window into the stronger group they belong to: a group whose strongest
+     * signal belongs to the same part as a stronger group's, or that shares a part with a stronger group and is
+     * less than {@link #WEAK_SHARE} of its strength, is the same motion seen at another frequency (a modulated or
+     * irregular limit cycle spreads over several peaks) and is kept as one of its other frequencies.
+     *
+     * @param groups the groups of one window, strongest first
+     * @return families of groups, the strongest group first in each, strongest family first
+     */
+    static List<List<OscillationGroup>> fold(List<OscillationGroup> groups) {
+        List<List<OscillationGroup>> families = new ArrayList<>();
+        for (OscillationGroup g : groups) {
+            Set<String> parts = partsOf(g);
+            String lead = ModeAnalysis.part(g.dominant().signal());
+            List<OscillationGroup> home = null;
+            for (List<OscillationGroup> f : families) {
+                OscillationGroup head = f.get(0);
+                boolean sameLead = ModeAnalysis.part(head.dominant().signal()).equals(lead);
+                boolean weakSharing = g.strength() < WEAK_SHARE * head.strength()
+                        && partsOf(head).stream().anyMatch(parts::contains);
+                if (sameLead || weakSharing) {
+                    home = f;
                     break;
                 }
             }
             if (home == null) {
                 home = new ArrayList<>();
-                groups.add(home);
+                families.add(home);
             }
-            home.add(o);
+            home.add(g);
         }
-        for (List<Oscillation> g : groups) {
-            findings.add(finding(g, dimensions.get(g.get(0)), result.events(), from, to));
-        }
-        return findings;
+        return families;
     }
 
-    private static OscillationFinding finding(List<Oscillation> group, Dimension dimension, List<EventRecord> events,
-                                              double from, double to) {
-        Oscillation dominant = group.get(0);
-        Set<String> elements = new LinkedHashSet<>();
-        for (Oscillation o : group) {
-            elements.add(ModeAnalysis.owner(o.signal()));
+    private static Set<String> partsOf(OscillationGroup g) {
+        Set<String> parts = new LinkedHashSet<>();
+        for (OscillationGroup.Member m : g.members()) {
+            parts.add(ModeAnalysis.part(m.oscillation().signal()));
         }
+        return parts;
+    }
+
+    private static OscillationFinding finding(List<OscillationGroup> family, ScanWindow w, List<EventRecord> events) {
+        OscillationGroup g = family.get(0);
+        List<Double> others = new ArrayList<>();
+        for (int i = 1; i < family.size(); i++) {
+            others.add(family.get(i).frequency());
+        }
+        List<SignalOscillation> signals = new ArrayList<>();
+        Set<String> parts = new LinkedHashSet<>();
+        for (OscillationGroup.Member m : g.members()) {
+            signals.add(m.oscillation());
+            parts.add(ModeAnalysis.part(m.oscillation().signal()));
+        }
+        double cycles = g.frequency() * w.length();
         Map<String, Integer> impacts = new LinkedHashMap<>();
         for (EventRecord e : events) {
             boolean impact = (e.kind().equals("seat") || e.kind().equals("stop")) && !e.description().endsWith("(leaves)");
-            if (impact && e.time() >= from && e.time() <= to && elements.contains(ModeAnalysis.owner(e.owner()))) {
+            if (impact && w.contains(e.time()) && parts.contains(e.owner())) {
                 impacts.merge(e.owner(), 1, Integer::sum);
             }
         }
-        String member = null;
-        int most = 0;
-        for (Map.Entry<String, Integer> e : impacts.entrySet()) {
-            if (e.getValue() > most) {
-                most = e.getValue();
-                member = e.getKey();
-            }
-        }
-        boolean chatter = most >= CHATTER_IMPACTS;
+        Map<String, Double> perCycle = new LinkedHashMap<>();
+        impacts.forEach((member, n) -> perCycle.put(member, n / cycles));
+        boolean chatter = perCycle.values().stream().anyMatch(v -> v >= OscillationFinding.CHATTER_IMPACTS_PER_CYCLE);
         return new OscillationFinding(chatter ? OscillationFinding.Kind.CHATTER : OscillationFinding.Kind.HUNTING,
-                dominant.frequency(), dominant.trend(), dominant.growthRate(), dominant, dimension, List.copyOf(elements),
-                List.copyOf(group), chatter ? member : null, chatter ? most / (to - from) : 0.0);
+                g.frequency(), g.trend(), g.growthRate(), w, List.of(w), signals, List.copyOf(parts), perCycle, others,
+                null);
     }
 
-    private static double threshold(Dimension d, double[] t, double[] x, double from, double to) {
+    /** Joins the findings of different windows that are the same oscillation; keeps each at its strongest. */
+    private static List<OscillationFinding> merge(List<OscillationFinding> all) {
+        List<List<OscillationFinding>> same = new ArrayList<>();
+        for (OscillationFinding f : all) {
+            List<OscillationFinding> home = null;
+            for (List<OscillationFinding> s : same) {
+                OscillationFinding first = s.get(0);
+                double ratio = f.frequency() / first.frequency();
+                boolean sameWindow = s.stream().anyMatch(o -> o.window().equals(f.window()));
+                boolean sameStriker = f.impactingMember() != null && f.impactingMember().equals(first.impactingMember());
+                boolean samePart = ModeAnalysis.part(f.dominant().signal()).equals(ModeAnalysis.part(first.dominant().signal()));
+                if (!sameWindow && (sameStriker || samePart && ratio <= SAME_OSCILLATION_RATIO
+                        && ratio >= 1.0 / SAME_OSCILLATION_RATIO)) {
+                    home = s;
+                    break;
+                }
+            }
+            if (home == null) {
+                home = new ArrayList<>();
+                same.add(home);
+            }
+            home.add(f);
+        }
+        List<OscillationFinding> out = new ArrayList<>();
+        for (List<OscillationFinding> s : same) {
+            OscillationFinding strongest = s.stream()
+                    .max(Comparator.comparingDouble((OscillationFinding f) -> f.dominant().strength())).orElseThrow();
+            List<ScanWindow> windows = s.stream().map(OscillationFinding::window)
+                    .sorted(Comparator.comparingDouble(ScanWindow::from)).toList();
+            out.add(new OscillationFinding(strongest.kind(), strongest.frequency(), strongest.trend(),
+                    strongest.growthRate(), strongest.window(), windows, strongest.signals(), strongest.parts(),
+                    strongest.impactsPerCycle(), strongest.otherFrequencies(), null));
+        }
+        out.sort(Comparator.comparingDouble((OscillationFinding f) -> f.dominant().strength()).reversed()
+                .thenComparing(f -> f.dominant().signal()));
+        return out;
+    }
+
+    private static double threshold(Dimension d, double[] t, double[] x, ScanWindow w) {
         if (d == Dimension.PRESSURE) {
             double sum = 0.0;
             int n = 0;
             for (int k = 0; k < t.length; k++) {
-                if (t[k] >= from && t[k] <= to) {
+                if (w.contains(t[k])) {
                     sum += Math.abs(x[k]);
                     n++;
                 }
@@ -136,6 +225,7 @@ public final class OscillationScan {
         for (double v : x) {
             max = Math.max(max, Math.abs(v));
         }
-        return Math.max(POSITION_FLOOR, POSITION_FRACTION * max);
+        double floor = d == Dimension.ROTATIONAL_SPEED ? SPEED_FLOOR : POSITION_FLOOR;
+        return Math.max(floor, MOTION_FRACTION * max);
     }
 }

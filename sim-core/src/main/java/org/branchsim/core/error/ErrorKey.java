@@ -26,6 +26,8 @@ public enum ErrorKey {
      * run-time failure (exit code 1), not an input error.
      */
     NO_OPERATING_POINT(false, "no operating point at t = {0} s: {1}; states changing most {2}{3}"),
+    /** The eigenvalues of a linearised circuit could not be computed (the QR iteration did not converge). */
+    MODES_FAILED(false, "the modes of the circuit linearised at t = {0} s could not be computed: {1}"),
     /** Writing an output file failed. */
     OUTPUT_FAILED(false, "cannot write output {0}: {1}");
 

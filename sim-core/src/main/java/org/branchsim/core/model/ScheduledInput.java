@@ -89,6 +89,11 @@ public final class ScheduledInput {
         return result;
     }
 
+    /** @return the ramps in start-time order */
+    public List<Ramp> ramps() {
+        return List.copyOf(ramps);
+    }
+
     /** @return true when a ramp of non-zero duration is under way at time t (start included, end excluded) */
     public boolean rampingAt(double t) {
         for (Ramp r : ramps) {

@@ -86,15 +86,28 @@ public final class StudyRunner {
         }
     }
 
+    /**
+     * Builds the scenario of one variant without running it.
+     *
+     * @param fileName scenario file name (for messages)
+     * @param document the base document (not modified)
+     * @param values value per parameter path, as a scenario writes them
+     * @return the variant's scenario, with a fresh circuit
+     * @throws BranchsimException when a path does not exist or the changed scenario is not valid
+     */
+    public static Scenario build(String fileName, Located document, Map<String, Object> values) {
+        Located copy = document.copy();
+        for (Map.Entry<String, Object> e : values.entrySet()) {
+            ParameterPath.parse(e.getKey()).setOrAdd(copy, e.getValue());
+        }
+        return ScenarioLoader.build(fileName, copy);
+    }
+
     /** Builds and runs one variant; any expected failure becomes the outcome's error. */
     public static VariantOutcome runOne(String fileName, Located document, Variant v) {
         Scenario scenario = null;
         try {
-            Located copy = document.copy();
-            for (Map.Entry<String, Object> e : v.values().entrySet()) {
-                ParameterPath.parse(e.getKey()).setOrAdd(copy, e.getValue());
-            }
-            scenario = ScenarioLoader.build(fileName, copy);
+            scenario = build(fileName, document, v.values());
             SimulationResult r = Simulator.run(scenario.circuit(), scenario.solver());
             return new VariantOutcome(v, scenario, r, null);
         } catch (BranchsimException e) {
