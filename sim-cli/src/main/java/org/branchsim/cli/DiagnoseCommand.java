@@ -51,7 +51,7 @@ public final class DiagnoseCommand implements Callable<Integer> {
         Diagnosis.Report r = Diagnosis.run(s, n, done -> SweepCommand.progress(err, done, -1, start));
         err.println();
         String text = text(r);
-        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-diagnosis"));
+        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-diagnosis"), scenario.file());
         folder.writeText("diagnosis.txt", text);
         folder.writeText("diagnosis.json", MetricsReport.toJson(json(r)));
         if (!r.findings().isEmpty()) {
@@ -70,6 +70,7 @@ public final class DiagnoseCommand implements Callable<Integer> {
                 }
             }
         }
+        folder.commit();
         PrintWriter w = spec.commandLine().getOut();
         w.print(text);
         folder.report(w);

@@ -94,9 +94,10 @@ public final class ModesCommand implements Callable<Integer> {
         long flagged = modes.stream().filter(Mode::lightlyDamped).count();
         w.printf("%d modes, %d oscillatory, %d lightly damped (damping ratio < %.1f)%n", modes.size(),
                 modes.stream().filter(Mode::oscillatory).count(), flagged, Mode.LIGHT_DAMPING);
-        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-modes"));
+        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-modes"), scenario.file());
         folder.writeText("modes.json", MetricsReport.toJson(root));
         folder.writeText("modes.csv", csv.toString());
+        folder.commit();
         w.printf("outputs written to %s (modes.json, modes.csv)%n", folder.dir());
         w.println("Caution: " + Cautions.SHORT);
         return BranchsimMain.OK;

@@ -21,6 +21,9 @@ public final class ScenarioArgument {
 
     /** @return the loaded, checked scenario */
     public Scenario load() {
+        if (Files.isDirectory(file)) {
+            throw new BranchsimException(ErrorKey.SCENARIO_UNREADABLE, file, "a folder, not a scenario file");
+        }
         if (!Files.isRegularFile(file)) {
             throw new BranchsimException(ErrorKey.SCENARIO_UNREADABLE, file, "no such file");
         }

@@ -21,7 +21,9 @@ public enum ErrorKey {
     /** Any other failure of the solver library, with its own message. */
     SOLVER_FAILED(false, "the solver failed at t = {0} s: {1}; states: {2}"),
     /** Writing an output file failed. */
-    OUTPUT_FAILED(false, "cannot write output {0}: {1}");
+    OUTPUT_FAILED(false, "cannot write output {0}: {1}"),
+    /** Every variant of a study failed, so the study has no result (nothing is written). */
+    STUDY_FAILED(false, "all {0} variants failed, nothing written; the first failure (variant {1}): {2}");
 
     private final boolean inputError;
     private final String pattern;

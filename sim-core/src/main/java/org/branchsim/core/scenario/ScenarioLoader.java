@@ -33,6 +33,8 @@ public final class ScenarioLoader {
     private static final Pattern NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]*");
     private static final Pattern ID = Pattern.compile("[A-Za-z][A-Za-z0-9_-]*");
     private static final double DEFAULT_EXPANSION = 7e-4;
+    /** Longest scenario name: it names the output folder. */
+    private static final int MAX_NAME = 100;
 
     private ScenarioLoader() {
     }
@@ -56,9 +58,10 @@ public final class ScenarioLoader {
         Fields root = Fields.of(document, "", problems);
         root.number("formatVersion", 1, 1, 1);
         String name = root.text("name");
-        if (name != null && !NAME.matcher(name).matches()) {
-            root.problem("name", "a name of letters, digits, '.', '_' or '-' (it names the output folder)",
-                    "\"" + name + "\"");
+        if (name != null && (!NAME.matcher(name).matches() || name.length() > MAX_NAME)) {
+            root.problem("name", "a name of at most " + MAX_NAME + " letters, digits, '.', '_' or '-' (it names the "
+                    + "output folder)", name.length() > MAX_NAME ? "a name of " + name.length() + " characters"
+                    : "\"" + name + "\"");
         }
         String description = root.text("description", "");
         Fluid fluid = readFluid(root.object("fluid"), root, problems);

@@ -3,6 +3,7 @@ package org.branchsim.core.solve;
 import java.util.Locale;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.units.Units;
 
 /**
  * How to integrate one run. Times in s.
@@ -75,16 +76,17 @@ public record SolverSettings(Method method, double endTime, double outputInterva
             return null;
         }
         return String.format(Locale.ROOT, "an output grid of at most %d samples%s; coarsen outputInterval to at "
-                        + "least %.3g s or shorten endTime to at most %.3g s", most,
-                signals > 0 ? String.format(Locale.ROOT, " (%d values, %d signals per sample)", MAX_OUTPUT_VALUES,
+                        + "least %s s or shorten endTime to at most %s s", most,
+                signals > 0 ? String.format(Locale.ROOT, " (%d values at %d signals per sample)", MAX_OUTPUT_VALUES,
                         signals) : "",
-                endTime / (most - 1), interval * (most - 1));
+                Units.plain(endTime / (most - 1)), Units.plain(interval * (most - 1)));
     }
 
     /** @return the grid as found, for messages, e.g. {@code endTime 1e+06 s / outputInterval 0.001 s = 1e+09 samples} */
     public static String outputGrid(double endTime, double interval, int signals) {
-        return String.format(Locale.ROOT, "endTime %.6g s / outputInterval %.6g s = %.3g samples%s", endTime, interval,
-                outputSamples(endTime, interval), signals > 0 ? " of " + (signals + 1) + " values" : "");
+        return String.format(Locale.ROOT, "endTime %s s / outputInterval %s s = %s samples%s", Units.plain(endTime),
+                Units.plain(interval), Units.plain(outputSamples(endTime, interval)),
+                signals > 0 ? " of " + (signals + 1) + " values" : "");
     }
 
     /**
