@@ -3,8 +3,7 @@ package org.branchsim.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.DirectoryNotEmptyException;
-import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
 import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
@@ -171,8 +170,12 @@ public final class OutputFolder implements AutoCloseable {
                 Path old = moveAside();
                 try {
                     Files.move(folder, target, StandardCopyOption.ATOMIC_MOVE);
-                } catch (FileAlreadyExistsException | DirectoryNotEmptyException e) {
-                    // another run put its result in place between the two renames: it is newer than ours' old
+                } catch (FileSystemException e) {
+                    if (!Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
+                        throw e;
+                    }
+                    // another run put its result in place between our two renames ("directory not empty"):
+                    // the earlier result we set aside is older than it; set the other one aside in turn
                     deleteTree(old);
                     continue;
                 }
@@ -352,7 +355,7 @@ public final class OutputFolder implements AutoCloseable {
         if (e instanceof java.nio.file.AccessDeniedException) {
             return "permission denied: " + e.getMessage();
         }
-        if (e instanceof java.nio.file.FileSystemException f && f.getReason() != null) {
+        if (e instanceof FileSystemException f && f.getReason() != null) {
             return f.getReason() + ": " + f.getFile();
         }
         return String.valueOf(e.getMessage());
