@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Set;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Quantity;
+import org.branchsim.core.units.UnitSystem;
 import org.branchsim.core.units.Units;
 
 /**
@@ -106,7 +107,7 @@ final class Fields {
     private double required(String key, Dimension d, Sign sign) {
         Located v = raw(key);
         if (v == null) {
-            missing(key, "a " + d.humanName() + " such as \"" + example(d) + "\"");
+            missing(key, "a " + d.humanName() + " such as \"" + example(d, problems.units()) + "\"");
             return Double.NaN;
         }
         return checked(v, path(key), key, d, sign, problems);
@@ -238,7 +239,7 @@ final class Fields {
             if (s.isNumber()) {
                 double x = ((Number) s.value()).doubleValue();
                 if (d != Dimension.DIMENSIONLESS) {
-                    problems.add(v, path, "a " + d.humanName() + " with its unit, such as \"" + example(d) + "\"",
+                    problems.add(v, path, "a " + d.humanName() + " with its unit, such as \"" + example(d, problems.units()) + "\"",
                             v.describe() + " (a number without unit)");
                     return null;
                 }
@@ -258,15 +259,13 @@ final class Fields {
             }
         }
         problems.add(v, path, d == Dimension.DIMENSIONLESS ? "a number"
-                : "a " + d.humanName() + " such as \"" + example(d) + "\"", v.describe());
+                : "a " + d.humanName() + " such as \"" + example(d, problems.units()) + "\"", v.describe());
         return null;
     }
 
-    static String example(Dimension d) {
-        List<String> symbols = Units.symbolsOf(d);
-        String unit = symbols.isEmpty() ? d.siSymbol() : symbols.get(Math.min(symbols.size() - 1,
-                d == Dimension.PRESSURE ? 4 : d == Dimension.VOLUME_FLOW ? 1 : d == Dimension.LENGTH ? 2 : 0));
-        return "1 " + unit;
+    /** @return an example value of a dimension in the display unit of the scenario's unit system, e.g. "1 bar" */
+    static String example(Dimension d, UnitSystem system) {
+        return "1 " + system.displayUnit(d).symbol();
     }
 
     /** @return a number for messages */
