@@ -77,29 +77,7 @@ public final class SweepCommand implements Callable<Integer> {
         int n = OptionChecks.threads(threads);
         try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-sweep"),
                 scenario.file())) {
-            Map<String, List<Object>> axes = new LinkedHashMap<>();
-            long size = 1;
-            for (String v : vary) {
-                int eq = v.indexOf('=');
-                if (eq <= 0) {
-                    throw OptionChecks.bad("--vary: expected PATH=VALUES, e.g. \"elements.prv.dampingOrifice.diameter="
-                            + "0.5 mm..1 mm:6\", found \"" + v + "\"");
-                }
-                String path = v.substring(0, eq).trim();
-                if (axes.containsKey(path)) {
-                    throw OptionChecks.bad("--vary: expected each parameter once, found " + path + " twice");
-                }
-                String spec = v.substring(eq + 1).trim();
-                List<Object> values = values(spec, path, dimensionAt(base, path));
-                checkValues(base, path, values, RANGE.matcher(spec).matches());
-                axes.put(path, values);
-                size *= values.size();
-                if (size > OptionChecks.MAX_VARIANTS) {
-                    throw OptionChecks.bad("--vary: expected a grid of at most " + OptionChecks.MAX_VARIANTS
-                            + " variants, found more (" + axes.values().stream().map(l -> Integer.toString(l.size()))
-                            .collect(java.util.stream.Collectors.joining(" x ")) + " so far)");
-                }
-            }
+            Map<String, List<Object>> axes = axes(base);
             List<Variant> variants = grid(axes);
             List<String> overlay = overlaySignals(base);
             List<String> predicted = StudyTable.columnsOf(base);
@@ -121,6 +99,34 @@ public final class SweepCommand implements Callable<Integer> {
             w.println("Caution: " + Cautions.SHORT);
         }
         return BranchsimMain.OK;
+    }
+
+    /** @return the --vary options as parameter path to values, each checked against the scenario */
+    private Map<String, List<Object>> axes(Scenario base) {
+        Map<String, List<Object>> axes = new LinkedHashMap<>();
+        long size = 1;
+        for (String v : vary) {
+            int eq = v.indexOf('=');
+            if (eq <= 0) {
+                throw OptionChecks.bad("--vary: expected PATH=VALUES, e.g. \"elements.prv.dampingOrifice.diameter="
+                        + "0.5 mm..1 mm:6\", found \"" + v + "\"");
+            }
+            String path = v.substring(0, eq).trim();
+            if (axes.containsKey(path)) {
+                throw OptionChecks.bad("--vary: expected each parameter once, found " + path + " twice");
+            }
+            String valuesText = v.substring(eq + 1).trim();
+            List<Object> values = values(valuesText, path, dimensionAt(base, path));
+            checkValues(base, path, values, RANGE.matcher(valuesText).matches());
+            axes.put(path, values);
+            size *= values.size();
+            if (size > OptionChecks.MAX_VARIANTS) {
+                throw OptionChecks.bad("--vary: expected a grid of at most " + OptionChecks.MAX_VARIANTS
+                        + " variants, found more (" + axes.values().stream().map(l -> Integer.toString(l.size()))
+                        .collect(java.util.stream.Collectors.joining(" x ")) + " so far)");
+            }
+        }
+        return axes;
     }
 
     /** @throws BranchsimException STUDY_FAILED (exit code 1) when no variant ran */

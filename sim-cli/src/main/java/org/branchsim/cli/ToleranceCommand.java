@@ -59,7 +59,8 @@ public final class ToleranceCommand implements Callable<Integer> {
                 scenario.file())) {
             List<ToleranceStudy.Parameter> params = ToleranceStudy.parameters(base.document());
             if (params.isEmpty()) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, base.file() + ": no value is written with a tolerance; "
+                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, base.file() + ":" + base.document().line() + ":"
+                        + base.document().column() + ": no value is written with a tolerance; "
                         + "write e.g. \"diameter\": \"0.8 mm \u00b1 0.02 mm\", \"springRate\": \"15 N/mm \u00b1 10 %\" or "
                         + "\"bulkModulus\": \"1.2 GPa .. 1.6 GPa\"");
             }

@@ -1,7 +1,6 @@
 package org.branchsim.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -105,7 +104,7 @@ class OutputFolderTest {
         Files.writeString(old.resolve("trace.csv"), "earlier");
         Files.writeString(old.resolve(OutputFolder.MARKER), "");
         try (OutputFolder f = new OutputFolder(target)) {
-            assertEquals("earlier", Files.readString(target.resolve("trace.csv")), "restored before anything else");
+            assertEquals("earlier", Files.readString(f.dir().resolve("trace.csv")), "restored before anything else");
         }
         assertEquals(Set.of("result"), names(dir));
     }
