@@ -6,6 +6,7 @@ import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -19,12 +20,16 @@ import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.SolverStatistics;
+import org.branchsim.core.scenario.FieldBounds;
+import org.branchsim.core.scenario.Located;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.scenario.ScenarioLoader;
 import org.branchsim.core.solve.Method;
 import org.branchsim.core.solve.Simulator;
 import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.study.ParameterPath;
 import org.branchsim.core.study.StudyRunner;
+import org.branchsim.core.study.ValueText;
 import org.branchsim.core.study.Variant;
 import org.branchsim.core.study.VariantOutcome;
 import org.branchsim.core.units.Dimension;
@@ -44,7 +49,7 @@ import picocli.CommandLine.Parameters;
 public final class BenchCommand implements Callable<Integer> {
 
     @Parameters(paramLabel = "SCENARIO", arity = "0..*",
-            description = "Scenarios to measure (default: the demos in scenarios/).")
+            description = "Scenarios to measure (default: the demos in ./scenarios or in scenarios/ beside the program).")
     private List<Path> scenarios = new ArrayList<>();
 
     @Option(names = "--runs", paramLabel = "N", defaultValue = "5", description = "Timed runs per scenario and method (default ${DEFAULT-VALUE}).")
@@ -74,6 +79,11 @@ public final class BenchCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "Threads for the sweep benchmark (default: all cores).")
     private Integer threads;
 
+    /** Most timed or warm-up runs per scenario and method. */
+    static final int MAX_RUNS = 1000;
+    /** The demos measured when no scenario is given, looked for in ./scenarios and beside the program. */
+    static final List<String> DEFAULT_DEMOS = List.of("fixture-clamp.json", "regulation-bench.json", "feed-stall.json");
+
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "out/bench", description = "Output folder (default ${DEFAULT-VALUE}).")
     private Path out;
 
@@ -82,11 +92,11 @@ public final class BenchCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (runs < 1 || warmup < 0 || sweepVariants < 0) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--runs must be at least 1, --warmup and --sweep-variants at least 0");
-        }
-        List<Path> files = scenarios.isEmpty() ? List.of(Path.of("scenarios", "fixture-clamp.json"),
-                Path.of("scenarios", "regulation-bench.json"), Path.of("scenarios", "feed-stall.json")) : scenarios;
+        OptionChecks.count("--runs", runs, 1, MAX_RUNS);
+        OptionChecks.count("--warmup", warmup, 0, MAX_RUNS);
+        OptionChecks.count("--sweep-variants", sweepVariants, 0, OptionChecks.MAX_VARIANTS);
+        int n = OptionChecks.threads(threads);
+        List<Path> files = scenarios.isEmpty() ? defaultDemos() : scenarios;
         List<Method> methodList = new ArrayList<>();
         for (String m : methods) {
             try {
@@ -96,6 +106,26 @@ public final class BenchCommand implements Callable<Integer> {
             }
         }
         Double end = endTime == null ? null : parseTime(endTime);
+        // every input is read and checked before the first measurement
+        Map<Path, SolverSettings> settingsOf = new LinkedHashMap<>();
+        for (Path file : files) {
+            if (!Files.isRegularFile(file)) {
+                throw new BranchsimException(ErrorKey.SCENARIO_UNREADABLE, file, "no such file");
+            }
+            Scenario base = ScenarioLoader.load(file);
+            settingsOf.put(file, end == null ? base.solver() : withEndTime(base, end));
+        }
+        if (sweepVariants > 0) {
+            sweepValue(ScenarioLoader.load(files.get(0)));
+        }
+        try (OutputFolder folder = new OutputFolder(out, files.toArray(new Path[0]))) {
+            measure(files, settingsOf, methodList, end, n, folder);
+        }
+        return BranchsimMain.OK;
+    }
+
+    private void measure(List<Path> files, Map<Path, SolverSettings> settingsOf, List<Method> methodList, Double end,
+                         int n, OutputFolder folder) {
         PrintWriter w = spec.commandLine().getOut();
         ObjectNode root = MetricsReport.mapper().createObjectNode();
         root.put("cores", Runtime.getRuntime().availableProcessors());
@@ -111,7 +141,7 @@ public final class BenchCommand implements Callable<Integer> {
                 "err/range", "heap MB");
         for (Path file : files) {
             Scenario base = ScenarioLoader.load(file);
-            SolverSettings settings = end == null ? base.solver() : base.solver().withEndTime(end);
+            SolverSettings settings = settingsOf.get(file);
             SimulationResult reference = null;
             if (!noReference) {
                 try {
@@ -174,26 +204,83 @@ public final class BenchCommand implements Callable<Integer> {
             }
         }
         if (sweepVariants > 0) {
-            root.set("sweep", sweep(files.get(0), end, w));
+            root.set("sweep", sweep(files.get(0), end, n, w));
         }
-        OutputFolder folder = new OutputFolder(out);
         folder.writeText("bench.json", MetricsReport.toJson(root));
         folder.writeText("bench.csv", csv.toString());
+        folder.commit();
         w.printf("results written to %s (bench.json, bench.csv)%n", folder.dir());
-        return BranchsimMain.OK;
     }
 
-    private ObjectNode sweep(Path file, Double end, PrintWriter w) {
+    /** @return the settings with the --end-time override, checked against the scenario's output grid */
+    private static SolverSettings withEndTime(Scenario base, double end) {
+        String grid = SolverSettings.outputGridProblem(end, base.solver().outputInterval(),
+                base.circuit().signals().size());
+        if (grid != null) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--end-time for " + base.file() + ": expected " + grid
+                    + ", found " + SolverSettings.outputGrid(end, base.solver().outputInterval(),
+                    base.circuit().signals().size()));
+        }
+        return base.solver().withEndTime(end);
+    }
+
+    /**
+     * @return the value the sweep benchmark varies, from the first scenario
+     * @throws BranchsimException BAD_ARGUMENT naming --sweep-parameter when the path names no number there
+     */
+    private Object sweepValue(Scenario base) {
+        Object current;
+        try {
+            Located at = ParameterPath.parse(sweepParameter).find(base.document());
+            current = at instanceof Located.Scalar sc ? sc.value() : null;
+        } catch (BranchsimException e) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--sweep-parameter: expected a parameter of "
+                    + base.file() + " (or --sweep-variants 0), found: " + e.getMessage());
+        }
+        if (ValueText.dimensionOf(current) == null) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--sweep-parameter " + sweepParameter
+                    + ": expected the path of a number or of a value with its unit, found " + current);
+        }
+        return current;
+    }
+
+    /** @return the demos beside the program or in ./scenarios */
+    static List<Path> defaultDemos() {
+        List<Path> looked = new ArrayList<>();
+        List<Path> candidates = new ArrayList<>();
+        candidates.add(Path.of("scenarios"));
+        try {
+            java.security.CodeSource source = BenchCommand.class.getProtectionDomain().getCodeSource();
+            if (source != null) {
+                Path p = Path.of(source.getLocation().toURI()).toAbsolutePath();
+                for (int up = 0; up < 4 && p != null; up++, p = p.getParent()) {
+                    candidates.add(p.resolve("scenarios"));
+                }
+            }
+        } catch (java.net.URISyntaxException | IllegalArgumentException | SecurityException e) {
+            // the program's own place is unknown: only ./scenarios is searched
+        }
+        for (Path dir : candidates) {
+            looked.add(dir.toAbsolutePath().normalize());
+            List<Path> demos = DEFAULT_DEMOS.stream().map(dir::resolve).toList();
+            if (demos.stream().allMatch(Files::isRegularFile)) {
+                return demos;
+            }
+        }
+        throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "bench: expected the default demos ("
+                + String.join(", ", DEFAULT_DEMOS) + ") in ./scenarios or beside the program, found none in "
+                + looked.stream().distinct().map(Path::toString).collect(java.util.stream.Collectors.joining(", "))
+                + "; pass scenario files: branchsim bench SCENARIO...");
+    }
+
+    private ObjectNode sweep(Path file, Double end, int n, PrintWriter w) {
         Scenario base = ScenarioLoader.load(file);
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         List<Variant> variants = new ArrayList<>();
-        Object current = org.branchsim.core.study.ParameterPath.parse(sweepParameter).find(base.document()) instanceof
-                org.branchsim.core.scenario.Located.Scalar sc ? sc.value() : null;
-        double si = current instanceof String text ? Quantity.si(text, Dimension.LENGTH) : 1e-3;
+        Object current = sweepValue(base);
         for (int i = 0; i < sweepVariants; i++) {
             Map<String, Object> values = new LinkedHashMap<>();
             double f = 0.8 + 0.4 * i / Math.max(1, sweepVariants - 1);
-            values.put(sweepParameter, String.format(Locale.ROOT, "%.6g mm", si * f * 1e3));
+            values.put(sweepParameter, ValueText.scale(current, f));
             if (end != null) {
                 values.put("solver.endTime", String.format(Locale.ROOT, "%.6g s", end));
             }
@@ -218,8 +305,10 @@ public final class BenchCommand implements Callable<Integer> {
 
     private static double parseTime(String text) {
         Quantity.Parsed p = Quantity.parse(text, Dimension.TIME);
-        if (!p.ok() || p.si() <= 0) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--end-time: expected a positive time such as \"10 s\", found \"" + text + "\"");
+        FieldBounds.Range bounds = FieldBounds.of("endTime", Dimension.TIME);
+        if (!p.ok() || p.si() <= 0 || !bounds.allows(p.si())) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--end-time: expected " + bounds.expected()
+                    + " such as \"10 s\", found \"" + text + "\"");
         }
         return p.si();
     }

@@ -59,10 +59,29 @@ public final class BranchsimMain implements Runnable {
                 c.getErr().println("error: " + b.fullReport());
                 return b.key().isInputError() ? BAD_INPUT : SIMULATION_FAILED;
             }
-            c.getErr().println("internal error: " + ex);
+            c.getErr().println("internal error (please report with the command and scenario): "
+                    + (ex.getMessage() == null ? ex.getClass().getSimpleName() : ex.getMessage()));
             return SIMULATION_FAILED;
         });
-        int code = cl.execute(args);
+        if (args.length > 0 && !args[0].startsWith("-") && !cl.getSubcommands().containsKey(args[0])) {
+            // checked here because picocli prints the main help for "UNKNOWN --help" and exits 0
+            err.println("error: unknown command \"" + args[0] + "\"; expected one of "
+                    + String.join(", ", cl.getSubcommands().keySet()));
+            err.println("see 'branchsim --help'");
+            err.flush();
+            return BAD_INPUT;
+        }
+        int code;
+        try {
+            code = cl.execute(args);
+        } catch (OutOfMemoryError e) {
+            err.println("error: out of memory; give Java more memory (java -Xmx...), use fewer --threads, "
+                    + "or coarsen outputInterval");
+            code = SIMULATION_FAILED;
+        } catch (StackOverflowError e) {
+            err.println("internal error: stack overflow (please report with the scenario)");
+            code = SIMULATION_FAILED;
+        }
         out.flush();
         err.flush();
         return code;

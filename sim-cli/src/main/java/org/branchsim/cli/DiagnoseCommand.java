@@ -75,21 +75,24 @@ public final class DiagnoseCommand implements Callable<Integer> {
         int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
-        Diagnosis.Report r = Diagnosis.run(s, new Diagnosis.Options(margin, given, onTrajectory, n),
-                done -> SweepCommand.progress(err, done, -1, start));
-        err.println();
-        String text = DiagnosisText.text(r);
-        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-diagnosis"));
-        folder.writeText("diagnosis.txt", text);
-        folder.writeText("diagnosis.json", MetricsReport.toJson(DiagnosisJson.of(r)));
-        int k = 0;
-        for (Diagnosis.FindingDiagnosis d : r.diagnosed()) {
-            k++;
-            figures(folder, s, r, d, k);
+        try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-diagnosis"),
+                scenario.file())) {
+            Diagnosis.Report r = Diagnosis.run(s, new Diagnosis.Options(margin, given, onTrajectory, n),
+                    done -> SweepCommand.progress(err, done, -1, start));
+            err.println();
+            String text = DiagnosisText.text(r);
+            folder.writeText("diagnosis.txt", text);
+            folder.writeText("diagnosis.json", MetricsReport.toJson(DiagnosisJson.of(r)));
+            int k = 0;
+            for (Diagnosis.FindingDiagnosis d : r.diagnosed()) {
+                k++;
+                figures(folder, s, r, d, k);
+            }
+            folder.commit();
+            PrintWriter w = spec.commandLine().getOut();
+            w.print(text);
+            folder.report(w);
         }
-        PrintWriter w = spec.commandLine().getOut();
-        w.print(text);
-        folder.report(w);
         return BranchsimMain.OK;
     }
 

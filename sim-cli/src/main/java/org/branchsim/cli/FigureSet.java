@@ -53,8 +53,20 @@ public final class FigureSet {
         }
     }
 
+    /** Longest slug: with its prefix ("plot-12-", "overlay-", "histogram-") and ".png" a name stays within 60. */
+    static final int MAX_SLUG = 40;
+
+    /**
+     * @return a file-name part made of a title: lower-case ASCII letters, digits and single dashes, at most
+     *         {@link #MAX_SLUG} characters (cut at a dash where possible), "figure" when nothing is left
+     */
     static String slug(String title) {
         String s = title.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-|-$)", "");
+        if (s.length() > MAX_SLUG) {
+            s = s.substring(0, MAX_SLUG);
+            int dash = s.lastIndexOf('-');
+            s = (dash >= MAX_SLUG / 2 ? s.substring(0, dash) : s).replaceAll("-$", "");
+        }
         return s.isEmpty() ? "figure" : s;
     }
 }

@@ -93,6 +93,13 @@ public final class ModesCommand implements Callable<Integer> {
             throw new BranchsimException(ErrorKey.BAD_ARGUMENT, String.format(Locale.ROOT,
                     "--at: expected a time in (0 s, %s s] (the scenario's end time), found \"%s\"", ValueText.format(end), at));
         }
+        try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-modes"),
+                scenario.file())) {
+            return report(s, t, zeta, folder);
+        }
+    }
+
+    private int report(Scenario s, double t, double zeta, OutputFolder folder) {
         SimulationResult r = Simulator.run(s.circuit(), s.solver().withEndTime(t));
         Circuit circuit = r.circuit();
         PrintWriter w = spec.commandLine().getOut();
@@ -171,9 +178,9 @@ public final class ModesCommand implements Callable<Integer> {
         w.printf(Locale.ROOT, "%d modes, %d oscillatory: %d UNSTABLE (damping ratio below 0), %d LOW (damping ratio "
                 + "below the margin %s)%n", modes.size(), modes.stream().filter(Mode::oscillatory).count(),
                 unstableCount, low, ValueText.format(zeta));
-        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-modes"));
         folder.writeText("modes.json", MetricsReport.toJson(root));
         folder.writeText("modes.csv", csv.toString());
+        folder.commit();
         w.printf("outputs written to %s (modes.json, modes.csv)%n", folder.dir());
         w.println("Caution: " + Cautions.SHORT);
         return BranchsimMain.OK;

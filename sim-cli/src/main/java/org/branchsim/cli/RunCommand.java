@@ -40,18 +40,21 @@ public final class RunCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Scenario s = scenario.load();
-        SimulationResult result = Simulator.run(s.circuit(), s.solver());
-        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name()));
-        List<OscillationFinding> oscillations = OscillationScan.scan(result);
-        List<ReducingValveMetrics> valves = ReducingValveMetrics.of(result, s.metricsFrom(), s.metricsTo(), oscillations);
-        String summary = summary(s, result, valves, oscillations);
-        folder.writeText("trace.csv", TraceCsv.format(result.trace(), s.units()));
-        folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
-        FigureSet.write(s, result.trace(), folder);
-        folder.writeText("summary.txt", summary);
-        PrintWriter w = spec.commandLine().getOut();
-        w.print(summary);
-        folder.report(w);
+        try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name()), scenario.file())) {
+            SimulationResult result = Simulator.run(s.circuit(), s.solver());
+            List<OscillationFinding> oscillations = OscillationScan.scan(result);
+            List<ReducingValveMetrics> valves = ReducingValveMetrics.of(result, s.metricsFrom(), s.metricsTo(),
+                    oscillations);
+            String summary = summary(s, result, valves, oscillations);
+            folder.writeText("trace.csv", TraceCsv.format(result.trace(), s.units()));
+            folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
+            FigureSet.write(s, result.trace(), folder);
+            folder.writeText("summary.txt", summary);
+            folder.commit();
+            PrintWriter w = spec.commandLine().getOut();
+            w.print(summary);
+            folder.report(w);
+        }
         return BranchsimMain.OK;
     }
 

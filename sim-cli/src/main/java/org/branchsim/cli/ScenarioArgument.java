@@ -21,8 +21,14 @@ public final class ScenarioArgument {
 
     /** @return the loaded, checked scenario */
     public Scenario load() {
-        if (!Files.isRegularFile(file)) {
+        if (Files.isDirectory(file)) {
+            throw new BranchsimException(ErrorKey.SCENARIO_UNREADABLE, file, "a folder, not a scenario file");
+        }
+        if (!Files.exists(file)) {
             throw new BranchsimException(ErrorKey.SCENARIO_UNREADABLE, file, "no such file");
+        }
+        if (!Files.isRegularFile(file)) {
+            throw new BranchsimException(ErrorKey.SCENARIO_UNREADABLE, file, "not a regular file");
         }
         return ScenarioLoader.load(file);
     }

@@ -9,7 +9,11 @@ import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.analysis.SignalStatistics;
+import org.branchsim.core.elements.ReducingValve;
+import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.Element;
 import org.branchsim.core.model.Node;
+import org.branchsim.core.model.SignalHandle;
 import org.branchsim.core.results.SolverStatistics;
 import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
@@ -55,35 +59,100 @@ final class StudyTable {
         Unit q = units.displayUnit(Dimension.VOLUME_FLOW);
         Unit w = units.displayUnit(Dimension.POWER);
         for (ReducingValveMetrics v : ReducingValveMetrics.of(o.result(), s.metricsFrom(), s.metricsTo())) {
-            String k = v.id() + ".";
-            m.put(k + "peakOutlet [" + p.symbol() + "]", p.fromSi(v.peak()));
-            m.put(k + "steadyOutlet [" + p.symbol() + "]", p.fromSi(v.steady()));
-            m.put(k + "overshoot [%]", v.overshootPercent());
-            m.put(k + "deviation [%]", v.deviationPercent());
-            m.put(k + "settlingTime [s]", v.settlingTime());
-            m.put(k + "drainFlow [" + q.symbol() + "]", q.fromSi(v.drainFlow()));
-            m.put(k + "drainPower [" + w.symbol() + "]", w.fromSi(v.drainPower()));
-            m.put(k + "meteringPower [" + w.symbol() + "]", w.fromSi(v.meteringPower()));
+            List<String> names = valveColumns(v.id(), units);
+            double[] values = {p.fromSi(v.peak()), p.fromSi(v.steady()), v.overshootPercent(), v.deviationPercent(),
+                v.settlingTime(), q.fromSi(v.drainFlow()), w.fromSi(v.drainPower()), w.fromSi(v.meteringPower())};
+            for (int i = 0; i < values.length; i++) {
+                m.put(names.get(i), values[i]);
+            }
         }
         for (SignalStatistics.Summary sum : SignalStatistics.of(o.result().trace())) {
-            if (sum.dimension() == Dimension.PRESSURE && isNode(o, sum.name())) {
-                m.put(sum.name() + ".peak [" + p.symbol() + "]", p.fromSi(sum.peak()));
-                m.put(sum.name() + ".final [" + p.symbol() + "]", p.fromSi(sum.last()));
+            if (sum.dimension() == Dimension.PRESSURE && isNode(o.result().circuit(), sum.name())) {
+                List<String> names = nodeColumns(sum.name(), units);
+                m.put(names.get(0), p.fromSi(sum.peak()));
+                m.put(names.get(1), p.fromSi(sum.last()));
             }
         }
         List<OscillationFinding> osc = OscillationScan.scan(o.result());
-        m.put("oscillations", (double) osc.size());
-        m.put("oscillation.frequency [Hz]", osc.isEmpty() ? 0.0 : osc.get(0).frequency());
         SolverStatistics st = o.result().statistics();
-        m.put("solver.steps", (double) st.acceptedSteps());
-        m.put("solver.evaluations", (double) st.evaluations());
-        m.put("energy.residual [%]", 100 * o.result().energy().relativeResidual());
+        double[] values = {osc.size(), osc.isEmpty() ? 0.0 : osc.get(0).frequency(), st.acceptedSteps(),
+            st.evaluations(), 100 * o.result().energy().relativeResidual()};
+        for (int i = 0; i < values.length; i++) {
+            m.put(RUN_COLUMNS.get(i), values[i]);
+        }
         return m;
     }
 
-    private static boolean isNode(VariantOutcome o, String signal) {
-        Node n = o.result().circuit().node(signal.substring(0, signal.length() - 2));
+    /** Columns every successful variant has, after those of valves and nodes. */
+    private static final List<String> RUN_COLUMNS = List.of("oscillations", "oscillation.frequency [Hz]",
+            "solver.steps", "solver.evaluations", "energy.residual [%]");
+
+    private static List<String> valveColumns(String id, UnitSystem units) {
+        String p = units.displayUnit(Dimension.PRESSURE).symbol();
+        String q = units.displayUnit(Dimension.VOLUME_FLOW).symbol();
+        String w = units.displayUnit(Dimension.POWER).symbol();
+        String k = id + ".";
+        return List.of(k + "peakOutlet [" + p + "]", k + "steadyOutlet [" + p + "]", k + "overshoot [%]",
+                k + "deviation [%]", k + "settlingTime [s]", k + "drainFlow [" + q + "]", k + "drainPower [" + w + "]",
+                k + "meteringPower [" + w + "]");
+    }
+
+    private static List<String> nodeColumns(String signal, UnitSystem units) {
+        String p = units.displayUnit(Dimension.PRESSURE).symbol();
+        return List.of(signal + ".peak [" + p + "]", signal + ".final [" + p + "]");
+    }
+
+    private static boolean isNode(Circuit circuit, String signal) {
+        if (!signal.endsWith(".p")) {
+            return false;
+        }
+        Node n = circuit.node(signal.substring(0, signal.length() - 2));
         return n != null && !n.isTank();
+    }
+
+    /**
+     * @param s a checked scenario (not run)
+     * @return the metric columns a successful run of it has, in summary.csv order: known before any run, so
+     *         that --rank-by and --histogram can be checked first
+     */
+    static List<String> columnsOf(Scenario s) {
+        List<String> cols = new ArrayList<>();
+        for (Element e : s.circuit().elements()) {
+            if (e instanceof ReducingValve v) {
+                cols.addAll(valveColumns(v.id(), s.units()));
+            }
+        }
+        for (SignalHandle h : s.circuit().signals()) {
+            if (h.dimension() == Dimension.PRESSURE && isNode(s.circuit(), h.name())) {
+                cols.addAll(nodeColumns(h.name(), s.units()));
+            }
+        }
+        cols.addAll(RUN_COLUMNS);
+        return cols;
+    }
+
+    /**
+     * Finds the metric a user names: the column name with or without its unit, in any case.
+     *
+     * @param option the option, for the message (e.g. "--rank-by")
+     * @param asked what the user wrote
+     * @param columns the columns
+     * @return the column
+     * @throws org.branchsim.core.error.BranchsimException BAD_ARGUMENT listing the valid names
+     */
+    static String resolve(String option, String asked, List<String> columns) {
+        String key = withoutUnit(asked);
+        List<String> hits = columns.stream()
+                .filter(c -> c.equalsIgnoreCase(asked.trim()) || withoutUnit(c).equals(key)).toList();
+        if (hits.size() == 1) {
+            return hits.get(0);
+        }
+        throw OptionChecks.bad(option + ": expected a metric of summary.csv (unit optional, any case): "
+                + String.join(", ", columns) + "; found \"" + asked + "\"");
+    }
+
+    private static String withoutUnit(String column) {
+        return column.trim().replaceAll("\\s*\\[[^\\]]*\\]$", "").toLowerCase(Locale.ROOT);
     }
 
     /** @return every metric column name over all successful variants, in first-seen order */

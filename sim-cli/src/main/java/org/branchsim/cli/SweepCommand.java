@@ -14,11 +14,15 @@ import java.util.regex.Pattern;
 import org.branchsim.core.elements.ReducingValve;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.scenario.Located;
 import org.branchsim.core.scenario.Scenario;
+import org.branchsim.core.scenario.ScenarioLoader;
 import org.branchsim.core.study.ParameterPath;
 import org.branchsim.core.study.StudyRunner;
 import org.branchsim.core.study.ValueText;
 import org.branchsim.core.study.Variant;
+import org.branchsim.core.units.Dimension;
+import org.branchsim.core.units.Quantity;
 import org.branchsim.plots.TraceCharts;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -34,7 +38,10 @@ import picocli.CommandLine.Option;
                 + "write summary.csv and overlay figures, print them ranked by a metric.")
 public final class SweepCommand implements Callable<Integer> {
 
-    private static final Pattern RANGE = Pattern.compile("^(.+?)\\s*\\.\\.\\s*(.+?)\\s*:\\s*(\\d+)$");
+    private static final Pattern RANGE = Pattern.compile("^(.+?)\\s*\\.\\.\\s*(.+?)\\s*:\\s*(\\S+)$");
+    private static final Pattern NUMBER_AND_UNIT =
+            Pattern.compile("^([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(.*?)$");
+
 
     @Mixin
     private ScenarioArgument scenario;
@@ -67,39 +74,67 @@ public final class SweepCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Scenario base = scenario.load();
+        int n = OptionChecks.threads(threads);
+        try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-sweep"),
+                scenario.file())) {
+            Map<String, List<Object>> axes = axes(base);
+            List<Variant> variants = grid(axes);
+            List<String> overlay = overlaySignals(base);
+            List<String> predicted = StudyTable.columnsOf(base);
+            String metric = rankBy != null ? StudyTable.resolve("--rank-by", rankBy, predicted)
+                    : predicted.stream().filter(c -> c.contains("overshoot")).findFirst().orElse(predicted.get(0));
+            PrintWriter err = spec.commandLine().getErr();
+            long start = System.nanoTime();
+            List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), variants, n,
+                    done -> progress(err, done, variants.size(), start), o -> StudyTable.Row.of(o, base.units(), overlay));
+            err.println();
+            printRanked(rows, metric);
+            requireOneSuccess(rows);
+            List<String> cols = StudyTable.columns(rows);
+            folder.writeText("summary.csv", StudyTable.csv(new ArrayList<>(axes.keySet()), rows, cols));
+            writeOverlays(base, rows, overlay, folder);
+            folder.commit();
+            PrintWriter w = spec.commandLine().getOut();
+            folder.report(w);
+            w.println("Caution: " + Cautions.SHORT);
+        }
+        return BranchsimMain.OK;
+    }
+
+    /** @return the --vary options as parameter path to values, each checked against the scenario */
+    private Map<String, List<Object>> axes(Scenario base) {
         Map<String, List<Object>> axes = new LinkedHashMap<>();
+        long size = 1;
         for (String v : vary) {
             int eq = v.indexOf('=');
             if (eq <= 0) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--vary: expected PATH=VALUES, found \"" + v + "\"");
+                throw OptionChecks.bad("--vary: expected PATH=VALUES, e.g. \"elements.prv.dampingOrifice.diameter="
+                        + "0.5 mm..1 mm:6\", found \"" + v + "\"");
             }
             String path = v.substring(0, eq).trim();
-            ParameterPath.parse(path).find(base.document());
-            axes.put(path, values(v.substring(eq + 1).trim(), path));
+            if (axes.containsKey(path)) {
+                throw OptionChecks.bad("--vary: expected each parameter once, found " + path + " twice");
+            }
+            String valuesText = v.substring(eq + 1).trim();
+            List<Object> values = values(valuesText, path, dimensionAt(base, path));
+            checkValues(base, path, values, RANGE.matcher(valuesText).matches());
+            axes.put(path, values);
+            size *= values.size();
+            if (size > OptionChecks.MAX_VARIANTS) {
+                throw OptionChecks.bad("--vary: expected a grid of at most " + OptionChecks.MAX_VARIANTS
+                        + " variants, found more (" + axes.values().stream().map(l -> Integer.toString(l.size()))
+                        .collect(java.util.stream.Collectors.joining(" x ")) + " so far)");
+            }
         }
-        List<Variant> variants = grid(axes);
-        List<String> overlay = overlaySignals(base);
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : Math.max(1, threads);
-        PrintWriter err = spec.commandLine().getErr();
-        long start = System.nanoTime();
-        List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), variants, n,
-                done -> progress(err, done, variants.size(), start), o -> StudyTable.Row.of(o, base.units(), overlay));
-        err.println();
-        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-sweep"));
-        List<String> cols = StudyTable.columns(rows);
-        String metric = rankBy != null ? rankBy : cols.stream().filter(c -> c.contains("overshoot")).findFirst()
-                .orElse(cols.isEmpty() ? null : cols.get(0));
-        if (metric != null && !cols.contains(metric)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--rank-by: expected a summary.csv column ("
-                    + String.join(", ", cols) + "), found \"" + metric + "\"");
+        return axes;
+    }
+
+    /** @throws BranchsimException STUDY_FAILED (exit code 1) when no variant ran */
+    static void requireOneSuccess(List<StudyTable.Row> rows) {
+        if (!rows.isEmpty() && rows.stream().noneMatch(StudyTable.Row::ok)) {
+            StudyTable.Row first = rows.get(0);
+            throw new BranchsimException(ErrorKey.STUDY_FAILED, rows.size(), first.variant().index(), first.error());
         }
-        folder.writeText("summary.csv", StudyTable.csv(new ArrayList<>(axes.keySet()), rows, cols));
-        writeOverlays(base, rows, overlay, folder);
-        printRanked(rows, metric);
-        PrintWriter w = spec.commandLine().getOut();
-        folder.report(w);
-        w.println("Caution: " + Cautions.SHORT);
-        return BranchsimMain.OK;
     }
 
     /** @return the signals to overlay: those asked for (checked), else the first reducing valve's outlet or node */
@@ -107,9 +142,12 @@ public final class SweepCommand implements Callable<Integer> {
         if (signals != null && !signals.isEmpty()) {
             for (String signal : signals) {
                 if (base.circuit().signal(signal) == null) {
-                    throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--signals: no signal \"" + signal
-                            + "\" in this circuit");
+                    throw OptionChecks.bad("--signals: expected signals of this circuit such as "
+                            + base.circuit().signals().get(0).name() + ", found \"" + signal + "\"");
                 }
+            }
+            if (signals.stream().distinct().count() < signals.size()) {
+                throw OptionChecks.bad("--signals: expected each signal once, found " + String.join(",", signals));
             }
             return signals;
         }
@@ -118,63 +156,106 @@ public final class SweepCommand implements Callable<Integer> {
                         .map(nd -> nd.id() + ".p").findFirst().orElse(base.circuit().signals().get(0).name())));
     }
 
-    static List<Object> values(String spec, String path) {
+    /** @return the dimension of the value at a path of the scenario (which must exist and be a number) */
+    static Dimension dimensionAt(Scenario base, String path) {
+        Located at;
+        try {
+            at = ParameterPath.parse(path).find(base.document());
+        } catch (BranchsimException e) {
+            throw OptionChecks.bad("--vary: " + e.getMessage());
+        }
+        Dimension d = at instanceof Located.Scalar sc ? ValueText.dimensionOf(sc.value()) : null;
+        if (d == null) {
+            throw OptionChecks.bad("--vary " + path + ": expected the path of a number or of a value with its unit, "
+                    + "found " + at.describe());
+        }
+        return d;
+    }
+
+    /**
+     * @param spec the values after '=': a list "a,b,c" or a range "from..to:count"
+     * @param path the parameter path (for messages)
+     * @param dimension the dimension of the field the path names
+     * @return the values, as the scenario would write them
+     */
+    static List<Object> values(String spec, String path, Dimension dimension) {
+        String option = "--vary " + path;
         List<Object> out = new ArrayList<>();
         Matcher m = RANGE.matcher(spec);
         if (m.matches()) {
-            int count = Integer.parseInt(m.group(3));
-            Object from = parseValue(m.group(1), path);
-            Object to = parseValue(m.group(2), path);
-            String unitFrom = unitOf(from);
-            String unitTo = unitOf(to);
-            if (count < 2 || !unitFrom.equals(unitTo)) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--vary " + path
-                        + ": a range needs the same unit at both ends and a count of at least 2, found \"" + spec + "\"");
+            String countText = m.group(3);
+            if (!countText.matches("\\d+")) {
+                throw OptionChecks.bad(option + ": expected a whole count after ':' (from..to:count), found \""
+                        + countText + "\"");
             }
-            double a = numberOf(from);
-            double b = numberOf(to);
-            for (int i = 0; i < count; i++) {
-                double x = a + (b - a) * i / (count - 1);
-                out.add(unitFrom.isEmpty() ? (Object) x : ValueText.format(x) + " " + unitFrom);
+            if (countText.length() > 9) {
+                throw OptionChecks.bad(option + " (count after ':'): expected a whole number from 2 to "
+                        + OptionChecks.MAX_VARIANTS + ", found " + countText);
+            }
+            long count = OptionChecks.count(option + " (count after ':')", Long.parseLong(countText), 2,
+                    OptionChecks.MAX_VARIANTS);
+            Quantity.Parsed from = parseValue(m.group(1), option, dimension);
+            Quantity.Parsed to = parseValue(m.group(2), option, dimension);
+            String written = unitWritten(m.group(1));
+            for (long i = 0; i < count; i++) {
+                double si = from.si() + (to.si() - from.si()) * i / (count - 1);
+                if (from.unit() == null || written.isEmpty()) {
+                    out.add(si);
+                } else {
+                    out.add(ValueText.format(from.unit().fromSi(si)) + " " + written);
+                }
             }
             return out;
         }
+        if (spec.contains("..")) {
+            throw OptionChecks.bad(option + ": expected a range with a count, from..to:count such as \"0.5 mm..1 mm:6\", "
+                    + "found \"" + spec + "\"");
+        }
         for (String part : spec.split(",")) {
             if (!part.isBlank()) {
-                out.add(parseValue(part.trim(), path));
+                Quantity.Parsed p = parseValue(part.trim(), option, dimension);
+                out.add(p.unit() == null || unitWritten(part).isEmpty() ? (Object) p.si() : part.trim());
             }
         }
         if (out.isEmpty()) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--vary " + path + ": no values in \"" + spec + "\"");
+            throw OptionChecks.bad(option + ": expected one or more values, found \"" + spec + "\"");
         }
         return out;
     }
 
-    private static Object parseValue(String text, String path) {
-        try {
-            Object scaled = ValueText.scale(text, 1.0);
-            return scaled instanceof Double ? scaled : text;
-        } catch (IllegalArgumentException e) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--vary " + path
-                    + ": expected a number with its unit such as \"0.8 mm\", found \"" + text + "\"");
+    private static Quantity.Parsed parseValue(String text, String option, Dimension dimension) {
+        Quantity.Parsed p = Quantity.parse(text.trim(), dimension);
+        if (!p.ok()) {
+            throw OptionChecks.bad(option + ": expected " + p.error() + " (the field is a " + dimension.humanName()
+                    + "), found \"" + text.trim() + "\"");
         }
+        return p;
     }
 
-    private static String unitOf(Object v) {
-        if (v instanceof Double) {
-            return "";
-        }
-        String s = String.valueOf(v).trim();
-        int sp = s.indexOf(' ');
-        return sp < 0 ? s.replaceAll("^[-+0-9.eE]+", "") : s.substring(sp + 1).trim();
+    /** @return the unit as the user wrote it after the number (empty for a bare number) */
+    private static String unitWritten(String text) {
+        Matcher m = NUMBER_AND_UNIT.matcher(text.trim());
+        return m.matches() ? m.group(2) : "";
     }
 
-    private static double numberOf(Object v) {
-        if (v instanceof Double d) {
-            return d;
+    /**
+     * Builds the scenario with each value of one parameter (of a range, its two ends suffice: bounds are
+     * intervals) so that a value the scenario refuses is named before any run.
+     */
+    private static void checkValues(Scenario base, String path, List<Object> values, boolean range) {
+        List<Object> probe = range ? List.of(values.get(0), values.get(values.size() - 1)) : values;
+        for (Object value : probe) {
+            Located copy = base.document().copy();
+            ParameterPath.parse(path).setOrAdd(copy, value);
+            try {
+                ScenarioLoader.build(base.file(), copy);
+            } catch (BranchsimException e) {
+                String why = e.problems().isEmpty() ? e.getMessage()
+                        : e.problems().get(0).path() + ": expected " + e.problems().get(0).expected();
+                throw OptionChecks.bad("--vary " + path + ": expected values the scenario accepts (" + why + "), found \""
+                        + value + "\"");
+            }
         }
-        String s = String.valueOf(v).trim();
-        return Double.parseDouble(s.replaceAll("^([-+]?[0-9.]+(?:[eE][-+]?\\d+)?).*$", "$1"));
     }
 
     /** Cartesian product, the first parameter varying slowest. */

@@ -52,67 +52,65 @@ public final class ToleranceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (runs < 2) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--runs: expected at least 2, found " + runs);
-        }
+        OptionChecks.count("--runs", runs, 2, OptionChecks.MAX_VARIANTS);
+        int n = OptionChecks.threads(threads);
         Scenario base = scenario.load();
-        List<ToleranceStudy.Parameter> params = ToleranceStudy.parameters(base.document());
-        if (params.isEmpty()) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, base.file() + ": no value is written with a tolerance; "
-                    + "write e.g. \"diameter\": \"0.8 mm ± 0.02 mm\", \"springRate\": \"15 N/mm ± 10 %\" or "
-                    + "\"bulkModulus\": \"1.2 GPa .. 1.6 GPa\"");
-        }
-        List<Variant> variants = ToleranceStudy.draw(params, runs, seed);
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : Math.max(1, threads);
-        PrintWriter err = spec.commandLine().getErr();
-        long start = System.nanoTime();
-        List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), variants, n,
-                d -> SweepCommand.progress(err, d, runs, start), o -> StudyTable.Row.of(o, base.units(), List.of()));
-        err.println();
-        List<String> cols = StudyTable.columns(rows);
-        List<ToleranceStudy.Statistics> stats = new ArrayList<>();
-        for (String c : cols) {
-            stats.add(ToleranceStudy.statistics(c, values(rows, c)));
-        }
-        OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-tolerance"));
-        folder.writeText("runs.csv", StudyTable.csv(params.stream().map(ToleranceStudy.Parameter::path).toList(),
-                rows, cols));
-        StringBuilder sum = new StringBuilder("metric,runs,mean,p5,p95,min,max\n");
-        for (ToleranceStudy.Statistics s : stats) {
-            sum.append(StudyTable.field(s.metric())).append(',').append(s.count()).append(',')
-                    .append(StudyTable.field(s.mean())).append(',').append(StudyTable.field(s.p5())).append(',')
-                    .append(StudyTable.field(s.p95())).append(',').append(StudyTable.field(s.min())).append(',')
-                    .append(StudyTable.field(s.max())).append('\n');
-        }
-        folder.writeText("statistics.csv", sum.toString());
-        String metric = histogram != null ? histogram : cols.stream().filter(c -> c.contains("overshoot")).findFirst()
-                .orElse(cols.isEmpty() ? null : cols.get(0));
-        if (metric != null) {
-            if (!cols.contains(metric)) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--histogram: expected one of " + String.join(", ", cols)
-                        + ", found \"" + metric + "\"");
+        try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-tolerance"),
+                scenario.file())) {
+            List<ToleranceStudy.Parameter> params = ToleranceStudy.parameters(base.document());
+            if (params.isEmpty()) {
+                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, base.file() + ":" + base.document().line() + ":"
+                        + base.document().column() + ": no value is written with a tolerance; "
+                        + "write e.g. \"diameter\": \"0.8 mm \u00b1 0.02 mm\", \"springRate\": \"15 N/mm \u00b1 10 %\" or "
+                        + "\"bulkModulus\": \"1.2 GPa .. 1.6 GPa\"");
             }
+            List<String> predicted = StudyTable.columnsOf(base);
+            String metric = histogram != null ? StudyTable.resolve("--histogram", histogram, predicted)
+                    : predicted.stream().filter(c -> c.contains("overshoot")).findFirst().orElse(predicted.get(0));
+            List<Variant> variants = ToleranceStudy.draw(params, runs, seed);
+            PrintWriter err = spec.commandLine().getErr();
+            long start = System.nanoTime();
+            List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), variants, n,
+                    d -> SweepCommand.progress(err, d, runs, start), o -> StudyTable.Row.of(o, base.units(), List.of()));
+            err.println();
+            SweepCommand.requireOneSuccess(rows);
+            List<String> cols = StudyTable.columns(rows);
+            List<ToleranceStudy.Statistics> stats = new ArrayList<>();
+            for (String c : cols) {
+                stats.add(ToleranceStudy.statistics(c, values(rows, c)));
+            }
+            folder.writeText("runs.csv", StudyTable.csv(params.stream().map(ToleranceStudy.Parameter::path).toList(),
+                    rows, cols));
+            StringBuilder sum = new StringBuilder("metric,runs,mean,p5,p95,min,max\n");
+            for (ToleranceStudy.Statistics s : stats) {
+                sum.append(StudyTable.field(s.metric())).append(',').append(s.count()).append(',')
+                        .append(StudyTable.field(s.mean())).append(',').append(StudyTable.field(s.p5())).append(',')
+                        .append(StudyTable.field(s.p95())).append(',').append(StudyTable.field(s.min())).append(',')
+                        .append(StudyTable.field(s.max())).append('\n');
+            }
+            folder.writeText("statistics.csv", sum.toString());
             double[] values = java.util.Arrays.stream(values(rows, metric)).filter(Double::isFinite).toArray();
             if (values.length > 0) {
                 folder.write("histogram-" + FigureSet.slug(metric) + ".png", p -> HistogramChart.save(values,
                         Math.max(5, (int) Math.ceil(Math.sqrt(values.length))),
                         base.name() + ": " + metric + " over " + values.length + " runs", metric, p));
             }
+            folder.commit();
+            PrintWriter w = spec.commandLine().getOut();
+            w.printf("%s: %d runs, seed %d, %d failed; toleranced values:%n", base.name(), runs, seed,
+                    rows.stream().filter(r -> !r.ok()).count());
+            for (ToleranceStudy.Parameter p : params) {
+                w.printf(Locale.ROOT, "  %s: %s, drawn uniformly from %s to %s %s%n", p.path(), p.tolerance().nominal(),
+                        ValueText.format(p.tolerance().low()), ValueText.format(p.tolerance().high()), p.tolerance().unit());
+            }
+            w.printf("%-44s %10s %10s %10s %10s %10s%n", "metric", "mean", "P5", "P95", "min", "max");
+            for (ToleranceStudy.Statistics s : stats) {
+                w.printf(Locale.ROOT, "%-44s %10.4g %10.4g %10.4g %10.4g %10.4g%n", s.metric(), s.mean(), s.p5(), s.p95(),
+                        s.min(), s.max());
+            }
+            folder.report(w);
+            w.println("Caution: " + Cautions.SHORT);
         }
-        PrintWriter w = spec.commandLine().getOut();
-        w.printf("%s: %d runs, seed %d, %d failed; toleranced values:%n", base.name(), runs, seed,
-                rows.stream().filter(r -> !r.ok()).count());
-        for (ToleranceStudy.Parameter p : params) {
-            w.printf(Locale.ROOT, "  %s: %s, drawn uniformly from %s to %s %s%n", p.path(), p.tolerance().nominal(),
-                    ValueText.format(p.tolerance().low()), ValueText.format(p.tolerance().high()), p.tolerance().unit());
-        }
-        w.printf("%-44s %10s %10s %10s %10s %10s%n", "metric", "mean", "P5", "P95", "min", "max");
-        for (ToleranceStudy.Statistics s : stats) {
-            w.printf(Locale.ROOT, "%-44s %10.4g %10.4g %10.4g %10.4g %10.4g%n", s.metric(), s.mean(), s.p5(), s.p95(),
-                    s.min(), s.max());
-        }
-        folder.report(w);
-        w.println("Caution: " + Cautions.SHORT);
         return BranchsimMain.OK;
     }
 

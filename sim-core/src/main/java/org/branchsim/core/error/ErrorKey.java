@@ -29,7 +29,9 @@ public enum ErrorKey {
     /** The eigenvalues of a linearised circuit could not be computed (the QR iteration did not converge). */
     MODES_FAILED(false, "the modes of the circuit linearised at t = {0} s could not be computed: {1}"),
     /** Writing an output file failed. */
-    OUTPUT_FAILED(false, "cannot write output {0}: {1}");
+    OUTPUT_FAILED(false, "cannot write output {0}: {1}"),
+    /** Every variant of a study failed, so the study has no result (nothing is written). */
+    STUDY_FAILED(false, "all {0} variants failed, nothing written; the first failure (variant {1}): {2}");
 
     private final boolean inputError;
     private final String pattern;

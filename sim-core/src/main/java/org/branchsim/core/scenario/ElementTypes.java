@@ -114,7 +114,8 @@ final class ElementTypes {
      */
     static PoppetGeometry readPoppet(Fields f, String settingKey) {
         PoppetGeometry body = readPoppetBody(f);
-        double preload = body == null ? Double.NaN : preload(f, settingKey, body.seatDiameter());
+        // read the setting even when the body has a problem, so that it is checked and not reported as unknown
+        double preload = preload(f, settingKey, body == null ? Double.NaN : body.seatDiameter());
         if (body == null || Double.isNaN(preload)) {
             return null;
         }
@@ -125,10 +126,6 @@ final class ElementTypes {
     static PoppetGeometry readPoppetBody(Fields f) {
         double seat = f.positive("seatDiameter", Dimension.LENGTH);
         double cone = f.positive("coneAngle", Dimension.ANGLE, Math.toRadians(90.0));
-        if (!Double.isNaN(cone) && cone > Math.PI) {
-            f.problem("coneAngle", "an angle up to 180 deg (180 deg is a flat seat)", f.raw("coneAngle").describe());
-            cone = Double.NaN;
-        }
         double rate = f.positive("springRate", Dimension.STIFFNESS);
         double mass = f.positive("mass", Dimension.MASS);
         double damping = f.nonNegative("damping", Dimension.DAMPING, 0.0);

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Set;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Quantity;
+import org.branchsim.core.units.UnitSystem;
 import org.branchsim.core.units.Units;
 
 /**
@@ -68,14 +69,14 @@ final class Fields {
         problems.add(obj, path(key), expected, "no \"" + key + "\" field");
     }
 
+    /** Which values of a field are allowed besides its bounds. */
+    private enum Sign {
+        ANY, POSITIVE, NON_NEGATIVE
+    }
+
     /** A dimensioned value that must be present. */
     double quantity(String key, Dimension d) {
-        Located v = raw(key);
-        if (v == null) {
-            missing(key, "a " + d.humanName() + " such as \"" + example(d) + "\"");
-            return Double.NaN;
-        }
-        return parseQuantity(v, path(key), d);
+        return required(key, d, Sign.ANY);
     }
 
     /** A dimensioned value with a default (SI) when absent. */
@@ -85,42 +86,31 @@ final class Fields {
 
     /** A dimensioned value that must be above zero. */
     double positive(String key, Dimension d) {
-        double v = quantity(key, d);
-        return checkPositive(key, v);
+        return required(key, d, Sign.POSITIVE);
     }
 
     /** A dimensioned value above zero, with a default (SI) when absent. */
     double positive(String key, Dimension d, double defaultSi) {
-        double v = quantity(key, d, defaultSi);
-        return has(key) ? checkPositive(key, v) : v;
+        return has(key) ? positive(key, d) : defaultSi;
     }
 
     /** A dimensioned value at or above zero that must be present. */
     double nonNegative(String key, Dimension d) {
-        double v = quantity(key, d);
-        if (!Double.isNaN(v) && v < 0.0) {
-            problems.add(raw(key), path(key), "a value of zero or more", raw(key).describe());
-            return Double.NaN;
-        }
-        return v;
+        return required(key, d, Sign.NON_NEGATIVE);
     }
 
     /** A dimensioned value at or above zero, with a default (SI) when absent. */
     double nonNegative(String key, Dimension d, double defaultSi) {
-        double v = quantity(key, d, defaultSi);
-        if (has(key) && !Double.isNaN(v) && v < 0.0) {
-            problems.add(raw(key), path(key), "a value of zero or more", raw(key).describe());
-            return Double.NaN;
-        }
-        return v;
+        return has(key) ? nonNegative(key, d) : defaultSi;
     }
 
-    private double checkPositive(String key, double v) {
-        if (!Double.isNaN(v) && v <= 0.0) {
-            problems.add(raw(key), path(key), "a value greater than zero", raw(key).describe());
+    private double required(String key, Dimension d, Sign sign) {
+        Located v = raw(key);
+        if (v == null) {
+            missing(key, "a " + d.humanName() + " such as \"" + example(d, problems.units()) + "\"");
             return Double.NaN;
         }
-        return v;
+        return checked(v, path(key), key, d, sign, problems);
     }
 
     /** A plain number (dimensionless) within [min, max], with a default. */
@@ -129,12 +119,16 @@ final class Fields {
         if (v == null) {
             return defaultValue;
         }
-        double x = parseQuantity(v, path(key), Dimension.DIMENSIONLESS);
-        if (!Double.isNaN(x) && (x < min || x > max)) {
-            problems.add(v, path(key), "a number from " + Units.plain(min) + " to " + Units.plain(max), v.describe());
+        Quantity.Parsed p = parse(v, path(key), Dimension.DIMENSIONLESS, problems);
+        if (p == null) {
             return Double.NaN;
         }
-        return x;
+        if (p.lowSi() < min || p.highSi() > max || p.si() < min || p.si() > max) {
+            problems.add(v, path(key), "a number from " + Units.plain(min) + " to " + Units.plain(max)
+                    + (p.lowSi() != p.highSi() ? " over the whole tolerance band" : ""), v.describe());
+            return Double.NaN;
+        }
+        return p.si();
     }
 
     /** A text value that must be present. */
@@ -208,40 +202,70 @@ final class Fields {
         }
     }
 
-    /** Parses a dimensioned value at a location. */
+    /**
+     * Parses a dimensioned value at a location and checks it against the bounds of its dimension (see
+     * {@link FieldBounds}); records a problem and returns NaN when it is not acceptable.
+     */
     static double parseQuantity(Located v, String path, Dimension d, Problems problems) {
+        String field = path.substring(path.lastIndexOf('.') + 1);
+        return checked(v, path, field, d, Sign.ANY, problems);
+    }
+
+    private static double checked(Located v, String path, String field, Dimension d, Sign sign, Problems problems) {
+        Quantity.Parsed p = parse(v, path, d, problems);
+        if (p == null) {
+            return Double.NaN;
+        }
+        String band = p.lowSi() != p.highSi() ? " over the whole tolerance band" : "";
+        if (sign == Sign.POSITIVE && p.lowSi() <= 0.0) {
+            problems.add(v, path, "a value greater than zero" + band, v.describe());
+            return Double.NaN;
+        }
+        if (sign == Sign.NON_NEGATIVE && p.lowSi() < 0.0) {
+            problems.add(v, path, "a value of zero or more" + band, v.describe());
+            return Double.NaN;
+        }
+        FieldBounds.Range range = FieldBounds.of(field, d);
+        if (range != null && (!range.allows(p.lowSi()) || !range.allows(p.highSi()) || !range.allows(p.si()))) {
+            problems.add(v, path, range.expected() + band, v.describe());
+            return Double.NaN;
+        }
+        return p.si();
+    }
+
+    /** @return the parsed value, or null after recording a problem */
+    private static Quantity.Parsed parse(Located v, String path, Dimension d, Problems problems) {
         if (v instanceof Located.Scalar s) {
             if (s.isNumber()) {
-                if (d == Dimension.DIMENSIONLESS) {
-                    return ((Number) s.value()).doubleValue();
+                double x = ((Number) s.value()).doubleValue();
+                if (d != Dimension.DIMENSIONLESS) {
+                    problems.add(v, path, "a " + d.humanName() + " with its unit, such as \"" + example(d, problems.units()) + "\"",
+                            v.describe() + " (a number without unit)");
+                    return null;
                 }
-                problems.add(v, path, "a " + d.humanName() + " with its unit, such as \"" + example(d) + "\"",
-                        v.describe() + " (a number without unit)");
-                return Double.NaN;
+                if (!Double.isFinite(x)) {
+                    problems.add(v, path, "a finite number", v.describe());
+                    return null;
+                }
+                return new Quantity.Parsed(x, null, null);
             }
             if (s.isText()) {
-                Quantity.Parsed p = Quantity.parse((String) s.value(), d);
+                Quantity.Parsed p = Quantity.parse((String) s.value(), d, problems.units());
                 if (p.ok()) {
-                    return p.si();
+                    return p;
                 }
                 problems.add(v, path, p.error(), v.describe());
-                return Double.NaN;
+                return null;
             }
         }
         problems.add(v, path, d == Dimension.DIMENSIONLESS ? "a number"
-                : "a " + d.humanName() + " such as \"" + example(d) + "\"", v.describe());
-        return Double.NaN;
+                : "a " + d.humanName() + " such as \"" + example(d, problems.units()) + "\"", v.describe());
+        return null;
     }
 
-    private double parseQuantity(Located v, String p, Dimension d) {
-        return parseQuantity(v, p, d, problems);
-    }
-
-    static String example(Dimension d) {
-        List<String> symbols = Units.symbolsOf(d);
-        String unit = symbols.isEmpty() ? d.siSymbol() : symbols.get(Math.min(symbols.size() - 1,
-                d == Dimension.PRESSURE ? 4 : d == Dimension.VOLUME_FLOW ? 1 : d == Dimension.LENGTH ? 2 : 0));
-        return "1 " + unit;
+    /** @return an example value of a dimension in the display unit of the scenario's unit system, e.g. "1 bar" */
+    static String example(Dimension d, UnitSystem system) {
+        return "1 " + system.displayUnit(d).symbol();
     }
 
     /** @return a number for messages */

@@ -5,14 +5,26 @@ import java.util.List;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.error.Problem;
+import org.branchsim.core.units.UnitSystem;
 
 /** Collects the problems of one scenario so that a user sees all of them at once. */
 final class Problems {
     private final String file;
     private final List<Problem> list = new ArrayList<>();
+    private UnitSystem units = UnitSystem.SI;
 
     Problems(String file) {
         this.file = file;
+    }
+
+    /** @return the unit system of the scenario, whose units hints list first */
+    UnitSystem units() {
+        return units;
+    }
+
+    /** Sets the unit system whose units hints list first. */
+    void preferUnits(UnitSystem system) {
+        this.units = system;
     }
 
     String file() {

@@ -33,6 +33,8 @@ public final class ScenarioLoader {
     private static final Pattern NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]*");
     private static final Pattern ID = Pattern.compile("[A-Za-z][A-Za-z0-9_-]*");
     private static final double DEFAULT_EXPANSION = 7e-4;
+    /** Longest scenario name: it names the output folder. */
+    private static final int MAX_NAME = 100;
 
     private ScenarioLoader() {
     }
@@ -52,12 +54,14 @@ public final class ScenarioLoader {
      */
     public static Scenario build(String fileName, Located document) {
         Problems problems = new Problems(fileName);
+        problems.preferUnits(declaredUnits(document));
         Fields root = Fields.of(document, "", problems);
         root.number("formatVersion", 1, 1, 1);
         String name = root.text("name");
-        if (name != null && !NAME.matcher(name).matches()) {
-            root.problem("name", "a name of letters, digits, '.', '_' or '-' (it names the output folder)",
-                    "\"" + name + "\"");
+        if (name != null && (!NAME.matcher(name).matches() || name.length() > MAX_NAME)) {
+            root.problem("name", "a name of at most " + MAX_NAME + " letters, digits, '.', '_' or '-' (it names the "
+                    + "output folder)", name.length() > MAX_NAME ? "a name of " + name.length() + " characters"
+                    : "\"" + name + "\"");
         }
         String description = root.text("description", "");
         Fluid fluid = readFluid(root.object("fluid"), root, problems);
@@ -78,6 +82,9 @@ public final class ScenarioLoader {
         }
         readSchedule(root, inputs, problems);
         SolverSettings solver = readSolver(root.object("solver"), root, problems);
+        if (solver != null && circuit != null) {
+            checkOutputGrid(root.object("solver"), solver, circuit.signals().size());
+        }
         UnitSystem units = UnitSystem.SI;
         List<Scenario.PlotGroup> plots = new ArrayList<>();
         double metricsFrom = 0.0;
@@ -110,9 +117,6 @@ public final class ScenarioLoader {
             return new Fluid(870, 46e-6, 1.6e9, 0, 1, 313.15);
         }
         double temperature = f.quantity("temperature", Dimension.TEMPERATURE, 313.15);
-        if (!Double.isNaN(temperature) && (temperature < 233.15 || temperature > 423.15)) {
-            f.problem("temperature", "a temperature from -40 degC to 150 degC", f.raw("temperature").describe());
-        }
         double nu = readViscosity(f, temperature);
         double density;
         if (f.has("density")) {
@@ -404,7 +408,37 @@ public final class ScenarioLoader {
         if (!Geometry.ok(end, dt, rtol, maxStep, minStep, evTol, maxEval) || method == null) {
             return null;
         }
+        if (SolverSettings.outputGridProblem(end, dt, 0) != null) {
+            checkOutputGrid(f, end, dt, 0);
+            return null;
+        }
         return new SolverSettings(method, end, dt, rtol, minStep, maxStep, evTol, (long) maxEval);
+    }
+
+    /** Refuses, before any run, an output grid beyond {@link SolverSettings#MAX_OUTPUT_VALUES}. */
+    private static void checkOutputGrid(Fields f, SolverSettings solver, int signals) {
+        checkOutputGrid(f, solver.endTime(), solver.outputInterval(), signals);
+    }
+
+    private static void checkOutputGrid(Fields f, double end, double dt, int signals) {
+        String problem = SolverSettings.outputGridProblem(end, dt, signals);
+        if (problem != null && f != null) {
+            f.problem(f.has("outputInterval") ? "outputInterval" : "endTime", problem,
+                    SolverSettings.outputGrid(end, dt, signals));
+        }
+    }
+
+    /**
+     * @return the unit system the document asks for, read without checking (so that hints about units can
+     *         list its units first); the checked reading comes later
+     */
+    private static UnitSystem declaredUnits(Located document) {
+        if (document instanceof Located.Obj root && root.get("outputs") instanceof Located.Obj out
+                && out.get("units") instanceof Located.Scalar s && s.value() instanceof String u
+                && "US".equalsIgnoreCase(u.trim())) {
+            return UnitSystem.US;
+        }
+        return UnitSystem.SI;
     }
 
     private static UnitSystem readUnits(Fields out) {
@@ -428,6 +462,7 @@ public final class ScenarioLoader {
             Fields p = Fields.of(list.get(i), out.path("plots") + "[" + i + "]", out.problems());
             String title = p.text("title");
             List<String> signals = new ArrayList<>();
+            Map<String, Integer> seen = new LinkedHashMap<>();
             List<Located> names = p.list("signals");
             if (names.isEmpty()) {
                 p.problem("signals", "a list of signal names such as \"clampLine.p\"", "none");
@@ -440,6 +475,12 @@ public final class ScenarioLoader {
                     continue;
                 }
                 String name = (String) sc.value();
+                Integer first = seen.putIfAbsent(name, k);
+                if (first != null) {
+                    out.problems().add(s, path, "each signal once in a plot group (\"" + name + "\" is already "
+                            + p.path("signals") + "[" + first + "])", "\"" + name + "\" again");
+                    continue;
+                }
                 if (circuit != null && circuit.signal(name) == null) {
                     out.problems().add(s, path, "a signal of this circuit, such as "
                             + circuit.signals().get(0).name(), "\"" + name + "\"");

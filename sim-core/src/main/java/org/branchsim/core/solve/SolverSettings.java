@@ -1,5 +1,10 @@
 package org.branchsim.core.solve;
 
+import java.util.Locale;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.units.Units;
+
 /**
  * How to integrate one run. Times in s.
  *
@@ -14,6 +19,75 @@ package org.branchsim.core.solve;
  */
 public record SolverSettings(Method method, double endTime, double outputInterval, double relativeTolerance,
                              double minStep, double maxStep, double eventTolerance, long maxEvaluations) {
+
+    /**
+     * Most samples an output grid may have (a sample per output interval from 0 to the end time): beyond it a
+     * run is refused before it starts. A million samples is a 1 ms grid over 1000 s.
+     */
+    public static final long MAX_OUTPUT_SAMPLES = 1_000_000L;
+    /**
+     * Most values (samples times signals plus time) a run may keep: 20 million doubles are 160 MB in memory
+     * and about 300 MB of trace.csv.
+     */
+    public static final long MAX_OUTPUT_VALUES = 20_000_000L;
+
+    /**
+     * Checks what every run needs: a method, a finite positive end time and output interval, and an output
+     * grid within {@link #MAX_OUTPUT_SAMPLES}.
+     *
+     * @throws BranchsimException BAD_ARGUMENT when a value cannot give a run
+     */
+    public SolverSettings {
+        if (method == null) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "solver settings need an integration method");
+        }
+        if (!(endTime > 0.0) || !Double.isFinite(endTime)) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "expected a finite end time above zero, found "
+                    + endTime + " s");
+        }
+        if (!(outputInterval > 0.0) || !Double.isFinite(outputInterval)) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "expected a finite output interval above zero, found "
+                    + outputInterval + " s");
+        }
+        String grid = outputGridProblem(endTime, outputInterval, 0);
+        if (grid != null) {
+            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "expected " + grid + ", found "
+                    + outputGrid(endTime, outputInterval, 0));
+        }
+    }
+
+    /** @return the number of samples on the output grid from 0 to {@code endTime} every {@code interval} */
+    public static double outputSamples(double endTime, double interval) {
+        return Math.floor(endTime / interval + 0.5) + 1.0;
+    }
+
+    /**
+     * @param endTime end time, s
+     * @param interval output interval, s
+     * @param signals signals recorded per sample (0 when not known yet)
+     * @return null when the grid is within {@link #MAX_OUTPUT_SAMPLES} and {@link #MAX_OUTPUT_VALUES};
+     *         otherwise what is expected, with the output interval or end time that would fit
+     */
+    public static String outputGridProblem(double endTime, double interval, int signals) {
+        double samples = outputSamples(endTime, interval);
+        double perSample = signals + 1.0;
+        long most = (long) Math.min(MAX_OUTPUT_SAMPLES, Math.floor(MAX_OUTPUT_VALUES / perSample));
+        if (samples <= most) {
+            return null;
+        }
+        return String.format(Locale.ROOT, "an output grid of at most %d samples%s; coarsen outputInterval to at "
+                        + "least %s s or shorten endTime to at most %s s", most,
+                signals > 0 ? String.format(Locale.ROOT, " (%d values at %d signals per sample)", MAX_OUTPUT_VALUES,
+                        signals) : "",
+                Units.plain(endTime / (most - 1)), Units.plain(interval * (most - 1)));
+    }
+
+    /** @return the grid as found, for messages, e.g. {@code endTime 1e+06 s / outputInterval 0.001 s = 1e+09 samples} */
+    public static String outputGrid(double endTime, double interval, int signals) {
+        return String.format(Locale.ROOT, "endTime %s s / outputInterval %s s = %s samples%s", Units.plain(endTime),
+                Units.plain(interval), Units.plain(outputSamples(endTime, interval)),
+                signals > 0 ? " of " + (signals + 1) + " values" : "");
+    }
 
     /**
      * Default method: the implicit Rosenbrock method, 12 to 136 times fewer derivative evaluations than

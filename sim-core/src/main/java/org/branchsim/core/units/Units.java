@@ -1,5 +1,6 @@
 package org.branchsim.core.units;
 
+import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -9,8 +10,14 @@ import java.util.stream.Collectors;
 
 /**
  * The table of unit symbols branchsim accepts. Factors are exact where NIST SP 811 (2008), Appendix B,
- * gives them exactly: in = 0.0254 m, lb = 0.45359237 kg, standard gravity 9.80665 m/s^2, US gallon =
- * 231 in^3, bar = 1e5 Pa.
+ * gives them exactly: in = 0.0254 m, ft = 0.3048 m, lb = 0.45359237 kg, standard gravity 9.80665 m/s^2,
+ * US gallon = 231 in^3, bar = 1e5 Pa, T/K = (t/degF + 459.67)/1.8.
+ *
+ * <p>Symbols are matched as written (after {@link #normalise}). A few symbols of the trade are also matched
+ * in any case ("PSI", "Bar", "GPM", "DegF"): those with no SI prefix that a change of case could turn into
+ * another unit. Symbols with an SI prefix ("mbar" millibar, "MPa" megapascal, "mm", "ms") are matched only
+ * as written, so that "Mbar" or "MM" are refused instead of read as milli-units. Pressures are gauge
+ * throughout; "psig" and "barg" say so explicitly and mean the same as "psi" and "bar".
  */
 public final class Units {
 
@@ -34,7 +41,13 @@ public final class Units {
     private static final double REVOLUTION = 2.0 * Math.PI;
     private static final double FOOT = 12.0 * INCH;
 
+    /** One row of the table: a unit and every spelling accepted for it. */
+    private record Entry(Unit unit, List<String> spellings, boolean anyCase, boolean usCustomary) {
+    }
+
+    private static final List<Entry> TABLE = new ArrayList<>();
     private static final Map<String, Unit> BY_SYMBOL = new LinkedHashMap<>();
+    private static final Map<String, Unit> BY_SYMBOL_ANY_CASE = new LinkedHashMap<>();
 
     static {
         Dimension d = Dimension.PRESSURE;
@@ -42,89 +55,94 @@ public final class Units {
         add(d, 1e3, "kPa");
         add(d, 1e6, "MPa");
         add(d, 1e9, "GPa");
-        add(d, 1e5, "bar");
+        anyCase(d, 1e5, "bar", "barg");
         add(d, 1e2, "mbar");
-        add(d, PSI, "psi");
-        add(d, 1e3 * PSI, "ksi");
+        us(anyCase(d, PSI, "psi", "psig"));
+        us(anyCase(d, 1e3 * PSI, "ksi", "kpsi"));
 
         d = Dimension.VOLUME_FLOW;
         add(d, 1.0, "m^3/s");
-        add(d, LITRE / MINUTE, "L/min", "l/min", "lpm");
+        anyCase(d, LITRE / MINUTE, "L/min", "lpm");
         add(d, LITRE, "L/s", "l/s");
         add(d, 1e-6, "cm^3/s", "mL/s");
         add(d, 1e-6 / MINUTE, "cm^3/min", "mL/min");
         add(d, 1e-3 / 3600.0, "m^3/h");
-        add(d, US_GALLON / MINUTE, "gal/min", "gpm");
-        add(d, INCH * INCH * INCH, "in^3/s");
+        us(anyCase(d, US_GALLON / MINUTE, "gal/min", "gpm"));
+        us(anyCase(d, INCH * INCH * INCH, "in^3/s"));
 
         d = Dimension.LENGTH;
         add(d, 1.0, "m");
         add(d, 1e-2, "cm");
         add(d, 1e-3, "mm");
         add(d, 1e-6, "um", "\u00b5m", "\u03bcm");
-        add(d, INCH, "in");
-        add(d, FOOT, "ft");
+        us(anyCase(d, INCH, "in"));
+        us(anyCase(d, FOOT, "ft"));
 
         d = Dimension.AREA;
         add(d, 1.0, "m^2");
         add(d, 1e-4, "cm^2");
         add(d, 1e-6, "mm^2");
-        add(d, INCH * INCH, "in^2");
+        us(anyCase(d, INCH * INCH, "in^2"));
 
         d = Dimension.VOLUME;
         add(d, 1.0, "m^3");
         add(d, LITRE, "L", "l");
         add(d, 1e-6, "cm^3", "mL", "ml", "cc");
         add(d, 1e-9, "mm^3");
-        add(d, INCH * INCH * INCH, "in^3");
-        add(d, US_GALLON, "gal");
+        us(anyCase(d, INCH * INCH * INCH, "in^3"));
+        us(anyCase(d, US_GALLON, "gal"));
 
         d = Dimension.DISPLACEMENT;
         add(d, 1.0, "m^3/rad");
         add(d, 1e-6 / REVOLUTION, "cm^3/rev", "mL/rev", "cc/rev");
-        add(d, INCH * INCH * INCH / REVOLUTION, "in^3/rev");
+        us(anyCase(d, INCH * INCH * INCH / REVOLUTION, "in^3/rev"));
 
         d = Dimension.ROTATIONAL_SPEED;
         add(d, 1.0, "rad/s");
-        add(d, REVOLUTION / MINUTE, "rpm", "rev/min", "1/min");
+        anyCase(d, REVOLUTION / MINUTE, "rpm", "rev/min", "1/min");
         add(d, REVOLUTION, "rev/s");
 
         d = Dimension.MASS;
         add(d, 1.0, "kg");
         add(d, 1e-3, "g");
+        add(d, 1e-6, "mg");
         add(d, 1e3, "t");
-        add(d, POUND_MASS, "lb");
+        us(anyCase(d, POUND_MASS, "lb", "lbm"));
 
         d = Dimension.TIME;
         add(d, 1.0, "s");
         add(d, 1e-3, "ms");
-        add(d, 1e-6, "us");
+        add(d, 1e-6, "us", "\u00b5s", "\u03bcs");
         add(d, MINUTE, "min");
         add(d, 3600.0, "h");
 
         d = Dimension.FORCE;
         add(d, 1.0, "N");
         add(d, 1e3, "kN");
-        add(d, POUND_FORCE, "lbf");
+        us(anyCase(d, POUND_FORCE, "lbf"));
 
         d = Dimension.STIFFNESS;
         add(d, 1.0, "N/m");
         add(d, 1e3, "N/mm", "kN/m");
         add(d, 1e6, "kN/mm");
-        add(d, POUND_FORCE / INCH, "lbf/in");
+        us(anyCase(d, POUND_FORCE / INCH, "lbf/in"));
 
         d = Dimension.DAMPING;
         add(d, 1.0, "N*s/m");
         add(d, 1e3, "N*s/mm", "kN*s/m");
-        add(d, POUND_FORCE / INCH, "lbf*s/in");
+        us(anyCase(d, POUND_FORCE / INCH, "lbf*s/in"));
 
-        addTemperature("K", 1.0, 0.0);
-        addTemperature("degC", 1.0, 273.15);
-        addTemperature("degF", 5.0 / 9.0, 273.15 - 32.0 * 5.0 / 9.0);
+        d = Dimension.TEMPERATURE;
+        TABLE.add(new Entry(new Unit("K", d, 1.0, 0.0), List.of("K"), false, false));
+        TABLE.add(new Entry(new Unit("degC", d, 1.0, 273.15),
+                List.of("degC", "\u00b0C", "\u2103"), true, false));
+        TABLE.add(new Entry(new Unit("degF", d, 1.0 / 1.8, 459.67 / 1.8),
+                List.of("degF", "\u00b0F", "\u2109"), true, true));
 
         d = Dimension.KINEMATIC_VISCOSITY;
         add(d, 1.0, "m^2/s");
-        add(d, 1e-6, "cSt", "mm^2/s");
+        anyCase(d, 1e-6, "cSt");
+        add(d, 1e-6, "mm^2/s");
 
         d = Dimension.DYNAMIC_VISCOSITY;
         add(d, 1.0, "Pa*s");
@@ -133,12 +151,12 @@ public final class Units {
         d = Dimension.DENSITY;
         add(d, 1.0, "kg/m^3");
         add(d, 1e3, "g/cm^3", "kg/L");
-        add(d, POUND_MASS / (FOOT * FOOT * FOOT), "lb/ft^3");
+        us(anyCase(d, POUND_MASS / (FOOT * FOOT * FOOT), "lb/ft^3"));
 
         d = Dimension.TORQUE;
         add(d, 1.0, "N*m", "Nm");
-        add(d, POUND_FORCE * INCH, "lbf*in");
-        add(d, POUND_FORCE * FOOT, "lbf*ft");
+        us(anyCase(d, POUND_FORCE * INCH, "lbf*in"));
+        us(anyCase(d, POUND_FORCE * FOOT, "lbf*ft"));
 
         d = Dimension.ROTATIONAL_INERTIA;
         add(d, 1.0, "kg*m^2");
@@ -150,43 +168,87 @@ public final class Units {
 
         d = Dimension.ANGLE;
         add(d, 1.0, "rad");
-        add(d, Math.PI / 180.0, "deg");
+        anyCase(d, Math.PI / 180.0, "deg", "\u00b0");
 
         d = Dimension.VELOCITY;
         add(d, 1.0, "m/s");
         add(d, 1e-3, "mm/s");
-        add(d, INCH, "in/s");
+        us(anyCase(d, INCH, "in/s"));
 
         d = Dimension.FREQUENCY;
-        add(d, 1.0, "Hz");
+        anyCase(d, 1.0, "Hz");
 
         d = Dimension.POWER;
         add(d, 1.0, "W");
         add(d, 1e3, "kW");
-        add(d, 550.0 * FOOT * POUND_FORCE, "hp");
+        us(anyCase(d, 550.0 * FOOT * POUND_FORCE, "hp"));
 
         d = Dimension.ENERGY;
         add(d, 1.0, "J");
         add(d, 1e3, "kJ");
-        add(d, FOOT * POUND_FORCE, "ft*lbf");
+        us(anyCase(d, FOOT * POUND_FORCE, "ft*lbf"));
 
         add(Dimension.DIMENSIONLESS, 1.0, "1");
         add(Dimension.DIMENSIONLESS, 0.01, "%");
+
+        index();
     }
 
     private Units() {
     }
 
-    private static void add(Dimension dimension, double factor, String symbol, String... aliases) {
-        Unit unit = new Unit(symbol, dimension, factor, 0.0);
-        BY_SYMBOL.put(normalise(symbol), unit);
-        for (String alias : aliases) {
-            BY_SYMBOL.put(normalise(alias), unit);
+    private static Entry add(Dimension dimension, double factor, String symbol, String... aliases) {
+        return row(dimension, factor, false, symbol, aliases);
+    }
+
+    private static Entry anyCase(Dimension dimension, double factor, String symbol, String... aliases) {
+        return row(dimension, factor, true, symbol, aliases);
+    }
+
+    private static Entry row(Dimension dimension, double factor, boolean anyCase, String symbol, String... aliases) {
+        List<String> spellings = new ArrayList<>();
+        spellings.add(symbol);
+        spellings.addAll(List.of(aliases));
+        Entry e = new Entry(new Unit(symbol, dimension, factor, 0.0), List.copyOf(spellings), anyCase, false);
+        TABLE.add(e);
+        return e;
+    }
+
+    /** Marks the last row added as a US customary unit (listed first in hints for US scenarios). */
+    private static void us(Entry e) {
+        TABLE.set(TABLE.lastIndexOf(e), new Entry(e.unit(), e.spellings(), e.anyCase(), true));
+    }
+
+    /**
+     * Builds the lookup maps and checks that no any-case spelling can be read as another unit: a clash is a
+     * defect of this table, found when the class loads.
+     */
+    private static void index() {
+        for (Entry e : TABLE) {
+            for (String s : e.spellings()) {
+                if (BY_SYMBOL.put(normalise(s), e.unit()) != null) {
+                    throw new IllegalStateException("unit spelling listed twice: " + s);
+                }
+            }
+        }
+        for (Entry e : TABLE) {
+            if (!e.anyCase()) {
+                continue;
+            }
+            for (String s : e.spellings()) {
+                String folded = fold(s);
+                for (Map.Entry<String, Unit> other : BY_SYMBOL.entrySet()) {
+                    if (fold(other.getKey()).equals(folded) && !other.getValue().equals(e.unit())) {
+                        throw new IllegalStateException("any-case spelling " + s + " clashes with " + other.getKey());
+                    }
+                }
+                BY_SYMBOL_ANY_CASE.put(folded, e.unit());
+            }
         }
     }
 
-    private static void addTemperature(String symbol, double factor, double offset) {
-        BY_SYMBOL.put(normalise(symbol), new Unit(symbol, Dimension.TEMPERATURE, factor, offset));
+    private static String fold(String spelling) {
+        return normalise(spelling).toLowerCase(Locale.ROOT);
     }
 
     /**
@@ -197,6 +259,7 @@ public final class Units {
         String s = symbol.trim()
                 .replace('\u00b7', '*').replace('\u22c5', '*')
                 .replace("\u00b2", "^2").replace("\u00b3", "^3")
+                .replaceAll("^(?i)(deg|\u00b0)\\s+([cf])$", "$1$2")
                 .replaceAll("\\s*\\*\\s*", "*")
                 .replaceAll("\\s*/\\s*", "/")
                 .replaceAll("\\s+", "*")
@@ -209,15 +272,16 @@ public final class Units {
      * @return the unit, or null when the symbol is unknown
      */
     public static Unit find(String symbol) {
-        return BY_SYMBOL.get(normalise(symbol));
+        String n = normalise(symbol);
+        Unit exact = BY_SYMBOL.get(n);
+        return exact != null ? exact : BY_SYMBOL_ANY_CASE.get(n.toLowerCase(Locale.ROOT));
     }
 
     /** @return the canonical symbols accepted for a dimension, in table order */
     public static List<String> symbolsOf(Dimension dimension) {
-        return Collections.unmodifiableList(BY_SYMBOL.values().stream()
-                .filter(u -> u.dimension() == dimension)
-                .map(Unit::symbol)
-                .distinct()
+        return Collections.unmodifiableList(TABLE.stream()
+                .filter(e -> e.unit().dimension() == dimension)
+                .map(e -> e.unit().symbol())
                 .collect(Collectors.toList()));
     }
 
@@ -234,10 +298,76 @@ public final class Units {
         return u;
     }
 
-    /** @return a short list of example symbols for a dimension, for error messages */
+    /** @return the canonical symbols of a dimension, for error messages (metric units first) */
     public static String examplesOf(Dimension dimension) {
-        List<String> all = symbolsOf(dimension);
-        return String.join(", ", all.subList(0, Math.min(6, all.size())));
+        return examplesOf(dimension, UnitSystem.SI);
+    }
+
+    /**
+     * @param dimension the dimension a field needs
+     * @param system the unit system the scenario writes its results in
+     * @return every canonical symbol of the dimension, the system's own units first (its display unit
+     *         leading), for hints in error messages
+     */
+    public static String examplesOf(Dimension dimension, UnitSystem system) {
+        String display = system.displayUnit(dimension).symbol();
+        List<String> first = new ArrayList<>();
+        List<String> rest = new ArrayList<>();
+        for (Entry e : TABLE) {
+            if (e.unit().dimension() != dimension) {
+                continue;
+            }
+            boolean own = e.usCustomary() == (system == UnitSystem.US);
+            String symbol = e.unit().symbol();
+            if (symbol.equals(display)) {
+                first.add(0, symbol);
+            } else {
+                (own ? first : rest).add(symbol);
+            }
+        }
+        first.addAll(rest);
+        return String.join(", ", first);
+    }
+
+    /**
+     * @return true when the symbol is a pressure unit with an "a" for absolute appended ("psia", "bara"),
+     *         which branchsim refuses because it reads every pressure as gauge
+     */
+    public static boolean isAbsolutePressure(String symbol) {
+        String n = normalise(symbol);
+        if (n.length() < 2 || Character.toLowerCase(n.charAt(n.length() - 1)) != 'a') {
+            return false;
+        }
+        Unit u = find(n.substring(0, n.length() - 1));
+        return u != null && u.dimension() == Dimension.PRESSURE && !n.endsWith("Pa");
+    }
+
+    /**
+     * Writes the table of accepted spellings as Markdown, one row per dimension; docs/scenario-format.md
+     * carries this text (a test keeps the two equal).
+     *
+     * @return the Markdown table
+     */
+    public static String markdownTable() {
+        StringBuilder sb = new StringBuilder("| dimension | accepted spellings (`=` joins spellings of one unit) |\n"
+                + "|---|---|\n");
+        for (Dimension d : Dimension.values()) {
+            List<String> cells = new ArrayList<>();
+            for (Entry e : TABLE) {
+                if (e.unit().dimension() != d) {
+                    continue;
+                }
+                List<String> written = new ArrayList<>();
+                for (String s : e.spellings()) {
+                    written.add("`" + s + "`");
+                }
+                cells.add(String.join(" = ", written) + (e.anyCase() ? " (any case)" : ""));
+            }
+            if (!cells.isEmpty()) {
+                sb.append("| ").append(d.humanName()).append(" | ").append(String.join("; ", cells)).append(" |\n");
+            }
+        }
+        return sb.toString();
     }
 
     /** @return {@code value} written for messages, e.g. 1.5e-05 or 210 */
@@ -245,6 +375,12 @@ public final class Units {
         if (value == Math.rint(value) && Math.abs(value) < 1e15) {
             return String.format(Locale.ROOT, "%.0f", value);
         }
-        return String.format(Locale.ROOT, "%.6g", value);
+        String s = String.format(Locale.ROOT, "%.6g", value);
+        int e = s.indexOf('e');
+        String mantissa = e < 0 ? s : s.substring(0, e);
+        if (mantissa.contains(".")) {
+            mantissa = mantissa.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+        return e < 0 ? mantissa : mantissa + s.substring(e);
     }
 }

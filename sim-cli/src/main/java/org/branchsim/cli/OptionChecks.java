@@ -1,0 +1,42 @@
+package org.branchsim.cli;
+
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
+
+/**
+ * Limits of command-line options shared by the commands, checked before any run. Every refusal names the
+ * option, what was expected and what was found (exit code 2).
+ */
+final class OptionChecks {
+
+    /** Most variants a sweep grid or a tolerance study may have. */
+    static final int MAX_VARIANTS = 10_000;
+    /** Most threads a study may use. */
+    static final int MAX_THREADS = 256;
+
+    private OptionChecks() {
+    }
+
+    /**
+     * @param asked the --threads value, or null for the default
+     * @return the threads to use: the number of cores unless asked
+     */
+    static int threads(Integer asked) {
+        if (asked == null) {
+            return Runtime.getRuntime().availableProcessors();
+        }
+        return (int) count("--threads", asked, 1, MAX_THREADS);
+    }
+
+    /** @return {@code value} when it is within [min, max]; otherwise refuses it */
+    static long count(String option, long value, long min, long max) {
+        if (value < min || value > max) {
+            throw bad(option + ": expected a whole number from " + min + " to " + max + ", found " + value);
+        }
+        return value;
+    }
+
+    static BranchsimException bad(String message) {
+        return new BranchsimException(ErrorKey.BAD_ARGUMENT, message);
+    }
+}
