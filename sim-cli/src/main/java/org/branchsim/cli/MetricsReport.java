@@ -43,7 +43,7 @@ public final class MetricsReport {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("scenario", scenario.name());
         root.put("file", scenario.file());
-        root.put("unitSystem", units.name());
+        root.put("unitSystem", units.scenarioName());
         root.put("caution", Cautions.SHORT);
 
         ObjectNode signals = root.putObject("signals");

@@ -48,7 +48,7 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Option(names = "--vary", required = true, paramLabel = "PATH=VALUES",
             description = "A parameter and its values: a list \"0.5 mm,0.7 mm,0.9 mm\" or a range \"0.5 mm..1 mm:6\" "
-                    + "(from..to:count). PATH as elements.prv.dampingOrifice.diameter. Repeat for a grid.")
+                    + "(from..to:count). PATH as elements.reducer.dampingOrifice.diameter. Repeat for a grid.")
     private List<String> vary;
 
     @Option(names = "--threads", paramLabel = "N", description = "Threads (default: all cores).")
@@ -108,7 +108,7 @@ public final class SweepCommand implements Callable<Integer> {
         for (String v : vary) {
             int eq = v.indexOf('=');
             if (eq <= 0) {
-                throw OptionChecks.bad("--vary: expected PATH=VALUES, e.g. \"elements.prv.dampingOrifice.diameter="
+                throw OptionChecks.bad("--vary: expected PATH=VALUES, e.g. \"elements.reducer.dampingOrifice.diameter="
                         + "0.5 mm..1 mm:6\", found \"" + v + "\"");
             }
             String path = v.substring(0, eq).trim();

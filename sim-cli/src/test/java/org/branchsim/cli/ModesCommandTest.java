@@ -25,7 +25,7 @@ class ModesCommandTest {
         assertTrue(o.out().contains("linearised about its operating point at t = 0.55 s"), o.out());
         assertTrue(o.out().contains("operating point: Newton converged"), o.out());
         assertTrue(o.out().contains("held members: none"), o.out());
-        assertTrue(o.out().contains("prv.pilot"), o.out());
+        assertTrue(o.out().contains("reducer.pilot"), o.out());
         assertTrue(o.out().contains("Caution: "), o.out());
 
         JsonNode json = new ObjectMapper().readTree(dir.resolve("modes.json").toFile());

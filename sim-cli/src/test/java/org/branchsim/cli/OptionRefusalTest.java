@@ -82,9 +82,9 @@ class OptionRefusalTest {
                 "--out", out.toString());
         refused(out, "--runs", "tolerance", FEED, "--runs", "0", "--out", out.toString());
         refused(out, "--runs", "tolerance", FEED, "--runs", "2000000000", "--out", out.toString());
-        refused(out, "--runs", "bench", "--runs", "0", "--out", out.toString(), FEED);
-        refused(out, "--end-time", "bench", "--end-time", "1e400 s", "--out", out.toString(), FEED);
-        refused(out, "--sweep-parameter", "bench", "--sweep-parameter", "elements.nothing.diameter", "--out",
+        refused(out, "--runs", "timing", "--runs", "0", "--out", out.toString(), FEED);
+        refused(out, "--end-time", "timing", "--end-time", "1e400 s", "--out", out.toString(), FEED);
+        refused(out, "--sweep-parameter", "timing", "--sweep-parameter", "elements.nothing.diameter", "--out",
                 out.toString(), FEED);
     }
 
@@ -164,8 +164,8 @@ class OptionRefusalTest {
     void benchFindsItsDemosWithoutBeingRunFromTheRepositoryRoot() {
         // the tests run in sim-cli/, where ./scenarios does not exist
         assertFalse(Files.isDirectory(Path.of("scenarios")));
-        List<Path> demos = BenchCommand.defaultDemos();
-        assertEquals(BenchCommand.DEFAULT_DEMOS.size(), demos.size());
+        List<Path> demos = TimingCommand.defaultDemos();
+        assertEquals(TimingCommand.DEFAULT_DEMOS.size(), demos.size());
         for (Path p : demos) {
             assertTrue(Files.isRegularFile(p), p.toString());
         }

@@ -62,6 +62,15 @@ class StudyCommandsTest {
         }
     }
 
+    /** The old command name still works for one release and says so. */
+    @Test
+    void oldCommandNameStillWorksWithANote() {
+        RunCommandTest.Outcome o = RunCommandTest.run("bench", "--runs", "0", FEED);
+        assertEquals(2, o.code(), o.err());
+        assertTrue(o.err().contains("note: \"bench\" is the old name of \"timing\""), o.err());
+        assertTrue(o.err().contains("--runs"), o.err());
+    }
+
     @Test
     void diagnoseReportsAStableCircuitAsStable(@TempDir Path dir) throws IOException {
         RunCommandTest.Outcome o = RunCommandTest.run("diagnose", FEED, "--out", dir.toString());
@@ -72,15 +81,15 @@ class StudyCommandsTest {
 
     @Test
     void benchWritesItsFigures(@TempDir Path dir) throws IOException {
-        RunCommandTest.Outcome o = RunCommandTest.run("bench", "--runs", "1", "--warmup", "0", "--methods", "implicit",
+        RunCommandTest.Outcome o = RunCommandTest.run("timing", "--runs", "1", "--warmup", "0", "--methods", "implicit",
                 "--end-time", "0.3 s", "--sweep-variants", "2", "--sweep-parameter", "elements.dcvPA.diameter",
                 "--out", dir.toString(), FEED);
         assertEquals(0, o.code(), o.err());
-        List<String> csv = Files.readAllLines(dir.resolve("bench.csv"));
+        List<String> csv = Files.readAllLines(dir.resolve("timing.csv"));
         assertTrue(csv.get(0).startsWith("scenario,method,simulated_s,median_wall_s"), csv.get(0));
         assertTrue(csv.get(1).startsWith("feed-stall,implicit,0.3"), csv.get(1));
-        assertTrue(Files.readString(dir.resolve("bench.json")).contains("\"variantsPerSecond\""));
-        assertEquals(2, RunCommandTest.run("bench", "--methods", "quantum", FEED).code());
+        assertTrue(Files.readString(dir.resolve("timing.json")).contains("\"variantsPerSecond\""));
+        assertEquals(2, RunCommandTest.run("timing", "--methods", "quantum", FEED).code());
     }
 
     private static String[] concat(String[] a, String... b) {

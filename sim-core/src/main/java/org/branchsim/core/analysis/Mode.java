@@ -10,11 +10,11 @@ import java.util.List;
  * @param imaginary imaginary part omega_d, rad/s (zero for a real mode)
  * @param naturalFrequency |lambda| / 2 pi, Hz
  * @param dampingRatio -sigma / |lambda| (1 for a real decaying or zero mode, negative when unstable)
- * @param name a short name from the parts that take part most, e.g. "prv.pilot + prv.chamber"
+ * @param name a short name from the parts that take part most, e.g. "reducer.pilot + reducer.chamber"
  * @param participation every free state's participation factor, normalised to sum to one, largest first
- * @param parts participation summed per part (a member such as {@code prv.spool}, or a node or element
- *        pressure such as {@code reduced} or {@code prv.chamber}), largest first
- * @param elements participation summed per element or node ({@code prv}, {@code reduced}), largest first
+ * @param parts participation summed per part (a member such as {@code reducer.spool}, or a node or element
+ *        pressure such as {@code reduced} or {@code reducer.chamber}), largest first
+ * @param elements participation summed per element or node ({@code reducer}, {@code reduced}), largest first
  * @param components magnitudes of the right eigenvector's components in scaled states (state / its typical
  *        magnitude), normalised so that the largest is 1, largest first
  */

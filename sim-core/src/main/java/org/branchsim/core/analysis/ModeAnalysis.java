@@ -107,8 +107,8 @@ public final class ModeAnalysis {
     }
 
     /**
-     * @return the part a state belongs to: its name without the last segment ({@code prv.spool.x} ->
-     *         {@code prv.spool}, {@code prv.chamber.p} -> {@code prv.chamber}, {@code reduced.p} -> {@code reduced})
+     * @return the part a state belongs to: its name without the last segment ({@code reducer.spool.x} ->
+     *         {@code reducer.spool}, {@code reducer.chamber.p} -> {@code reducer.chamber}, {@code reduced.p} -> {@code reduced})
      */
     public static String part(String stateName) {
         int dot = stateName.lastIndexOf('.');

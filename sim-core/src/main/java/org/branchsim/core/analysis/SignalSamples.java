@@ -9,7 +9,7 @@ import org.branchsim.core.units.Dimension;
  * One uniformly sampled signal handed to the oscillation detector, with what counts as noise for it.
  * The samples are not copied: the caller must not change them while a detection runs.
  *
- * @param name signal name, e.g. {@code prv.pilot.x}
+ * @param name signal name, e.g. {@code reducer.pilot.x}
  * @param dimension the signal's physical dimension (its samples are in the SI unit of that dimension)
  * @param samples the signal's values in SI, one per sample time of the trace
  * @param threshold smallest oscillation amplitude that counts, in the same SI unit as the samples; positive

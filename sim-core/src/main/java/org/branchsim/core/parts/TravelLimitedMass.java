@@ -141,7 +141,7 @@ public final class TravelLimitedMass {
         return v;
     }
 
-    /** @return the member's id, {@code <owner>.<name>}, e.g. {@code prv.spool} (the prefix of its states) */
+    /** @return the member's id, {@code <owner>.<name>}, e.g. {@code reducer.spool} (the prefix of its states) */
     public String id() {
         return owner + "." + name;
     }

@@ -10,7 +10,7 @@ import org.branchsim.core.elements.Orifice;
 import org.branchsim.core.elements.PoppetGeometry;
 import org.branchsim.core.elements.Pump;
 import org.branchsim.core.elements.ReliefValve;
-import org.branchsim.core.elements.ValveEdge;
+import org.branchsim.core.elements.MeteringPath;
 import org.branchsim.core.fluid.Fluid;
 import org.branchsim.core.model.Element;
 import org.branchsim.core.model.Node;
@@ -39,11 +39,11 @@ final class ElementTypes {
             double cd = f.number("cd", 0.05, 1.0, SHARP_EDGE_CD);
             return Geometry.ok(area, cd) ? new Orifice(id, n.get("a"), n.get("b"), area, cd) : null;
         });
-        register("valveEdge", List.of("a", "b"), (id, f, n, fluid) -> {
+        register("meteringPath", List.of("a", "b"), (id, f, n, fluid) -> {
             double area = Geometry.area(f, "diameter", "area");
             double cd = f.number("cd", 0.05, 1.0, SHARP_EDGE_CD);
             double opening = f.number("opening", 0.0, 1.0, 0.0);
-            return Geometry.ok(area, cd, opening) ? new ValveEdge(id, n.get("a"), n.get("b"), area, cd, opening) : null;
+            return Geometry.ok(area, cd, opening) ? new MeteringPath(id, n.get("a"), n.get("b"), area, cd, opening) : null;
         });
         register("checkValve", List.of("inlet", "outlet"), (id, f, n, fluid) -> {
             double crack = f.nonNegative("crackingPressure", Dimension.PRESSURE);
@@ -98,6 +98,14 @@ final class ElementTypes {
     @FunctionalInterface
     interface Reader {
         Element read(String id, Fields f, Map<String, Node> nodes, Fluid fluid);
+    }
+
+    /** Old type names still accepted for one release, with their new names. */
+    private static final Map<String, String> RENAMED = Map.of("valveEdge", "meteringPath");
+
+    /** @return the new name of an old type name, or null when the name is not an old one */
+    static String renamed(String type) {
+        return RENAMED.get(type);
     }
 
     static ElementReader find(String type) {

@@ -43,6 +43,11 @@ final class Fields {
         return path;
     }
 
+    /** Records a note about a field that does not stop the scenario (an old spelling still accepted). */
+    void note(String key, String text) {
+        problems.note(raw(key), path(key), text);
+    }
+
     String path(String key) {
         return path.isEmpty() ? key : path + "." + key;
     }

@@ -11,7 +11,8 @@ import org.branchsim.core.units.UnitSystem;
 final class Problems {
     private final String file;
     private final List<Problem> list = new ArrayList<>();
-    private UnitSystem units = UnitSystem.SI;
+    private final List<String> notes = new ArrayList<>();
+    private UnitSystem units = UnitSystem.METRIC;
 
     Problems(String file) {
         this.file = file;
@@ -37,6 +38,17 @@ final class Problems {
 
     void addAt(int line, int column, String path, String expected, String found) {
         list.add(new Problem(file, line, column, path, expected, found));
+    }
+
+    /** Records a note that does not stop the scenario (an old spelling still accepted), located like a problem. */
+    void note(Located at, String path, String text) {
+        notes.add(String.format(java.util.Locale.ROOT, "%s:%d:%d: %s: %s", file, at == null ? 0 : at.line(),
+                at == null ? 0 : at.column(), path, text));
+    }
+
+    /** @return the notes recorded so far */
+    List<String> notes() {
+        return List.copyOf(notes);
     }
 
     boolean isEmpty() {

@@ -18,10 +18,11 @@ import org.branchsim.core.units.UnitSystem;
  * @param metricsFrom start of the window for regulation metrics, s (leaves start-up out)
  * @param metricsTo end of that window, s (the end time unless given)
  * @param document the parsed document, for building variants (sweeps)
+ * @param notes located notes that did not stop the scenario, e.g. old spellings accepted for one more release
  */
 public record Scenario(String name, String description, String file, Circuit circuit, SolverSettings solver,
                        UnitSystem units, List<PlotGroup> plots, double metricsFrom, double metricsTo,
-                       Located document) {
+                       Located document, List<String> notes) {
 
     /**
      * A figure the scenario asks for.

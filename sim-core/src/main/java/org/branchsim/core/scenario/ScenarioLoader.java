@@ -85,7 +85,7 @@ public final class ScenarioLoader {
         if (solver != null && circuit != null) {
             checkOutputGrid(root.object("solver"), solver, circuit.signals().size());
         }
-        UnitSystem units = UnitSystem.SI;
+        UnitSystem units = UnitSystem.METRIC;
         List<Scenario.PlotGroup> plots = new ArrayList<>();
         double metricsFrom = 0.0;
         double metricsTo = solver == null ? Double.NaN : solver.endTime();
@@ -108,7 +108,7 @@ public final class ScenarioLoader {
         root.finish();
         problems.throwIfAny();
         return new Scenario(name, description, fileName, circuit, solver, units, plots, metricsFrom, metricsTo,
-                document);
+                document, problems.notes());
     }
 
     private static Fluid readFluid(Fields f, Fields root, Problems problems) {
@@ -267,6 +267,12 @@ public final class ScenarioLoader {
             String id = f.text("id");
             boolean idOk = checkId(f, id, ids);
             String type = f.text("type");
+            String renamed = type == null ? null : ElementTypes.renamed(type);
+            if (renamed != null) {
+                f.note("type", "\"" + type + "\" is the old name of \"" + renamed + "\"; it is still accepted in this "
+                        + "release and will be refused in the next");
+                type = renamed;
+            }
             ElementReader reader = type == null ? null : ElementTypes.find(type);
             if (type != null && reader == null) {
                 f.problem("type", "an element type (" + ElementTypes.names() + ")", "\"" + type + "\"");
@@ -435,24 +441,29 @@ public final class ScenarioLoader {
     private static UnitSystem declaredUnits(Located document) {
         if (document instanceof Located.Obj root && root.get("outputs") instanceof Located.Obj out
                 && out.get("units") instanceof Located.Scalar s && s.value() instanceof String u
-                && "US".equalsIgnoreCase(u.trim())) {
+                && "us".equalsIgnoreCase(u.trim())) {
             return UnitSystem.US;
         }
-        return UnitSystem.SI;
+        return UnitSystem.METRIC;
     }
 
     private static UnitSystem readUnits(Fields out) {
-        String u = out.text("units", "SI");
-        if ("SI".equalsIgnoreCase(u)) {
-            return UnitSystem.SI;
+        String u = out.text("units", "metric");
+        if ("metric".equalsIgnoreCase(u)) {
+            return UnitSystem.METRIC;
         }
-        if ("US".equalsIgnoreCase(u)) {
+        if ("us".equalsIgnoreCase(u)) {
             return UnitSystem.US;
         }
-        if (u != null) {
-            out.problem("units", "\"SI\" (bar, L/min, mm) or \"US\" (psi, gal/min, in)", "\"" + u + "\"");
+        if ("SI".equalsIgnoreCase(u)) {
+            out.note("units", "\"SI\" is the old name of \"metric\" (bar, L/min and mm are metric units of the trade, "
+                    + "not SI units); it is still accepted in this release and will be refused in the next");
+            return UnitSystem.METRIC;
         }
-        return UnitSystem.SI;
+        if (u != null) {
+            out.problem("units", "\"metric\" (bar, L/min, mm) or \"us\" (psi, gal/min, in)", "\"" + u + "\"");
+        }
+        return UnitSystem.METRIC;
     }
 
     private static List<Scenario.PlotGroup> readPlots(Fields out, Circuit circuit) {

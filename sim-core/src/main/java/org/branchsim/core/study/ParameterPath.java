@@ -8,7 +8,7 @@ import org.branchsim.core.scenario.Located;
 
 /**
  * The address of one value in a scenario document, written with dots. List items of {@code nodes} and
- * {@code elements} are picked by their id: {@code elements.prv.dampingOrifice.diameter},
+ * {@code elements} are picked by their id: {@code elements.reducer.dampingOrifice.diameter},
  * {@code nodes.clampLine.volume}, {@code fluid.bulkModulus}, {@code solver.relativeTolerance}.
  */
 public final class ParameterPath {
@@ -32,7 +32,7 @@ public final class ParameterPath {
             if (p.isBlank()) {
                 throw new BranchsimException(ErrorKey.BAD_ARGUMENT,
                         "parameter path \"" + text + "\": expected names separated by single dots, e.g. "
-                                + "elements.prv.dampingOrifice.diameter");
+                                + "elements.reducer.dampingOrifice.diameter");
             }
             segs.add(p.trim());
         }

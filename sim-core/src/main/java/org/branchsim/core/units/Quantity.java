@@ -45,7 +45,7 @@ public final class Quantity {
      * @return the parsed SI value, or an explanation of what is wrong
      */
     public static Parsed parse(String text, Dimension expected) {
-        return parse(text, expected, UnitSystem.SI);
+        return parse(text, expected, UnitSystem.METRIC);
     }
 
     /**

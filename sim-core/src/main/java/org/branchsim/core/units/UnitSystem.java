@@ -4,12 +4,13 @@ import java.util.EnumMap;
 import java.util.Map;
 
 /**
- * The unit system results are written in. SI uses the units a metric shop floor reads (bar, L/min, mm);
- * US customary uses psi, gal/min and inches. Internally everything stays SI.
+ * The unit system results are written in, named in a scenario as {@code "metric"} (the units a metric shop floor
+ * reads: bar, L/min, mm, kW; not strictly SI) or {@code "us"} (US customary: psi, gal/min, in, hp). Internally
+ * everything stays SI.
  */
 public enum UnitSystem {
     /** Metric units of the trade: bar, L/min, mm, N, kW. */
-    SI,
+    METRIC,
     /** US customary units: psi, gal/min, in, lbf, hp. */
     US;
 
@@ -46,9 +47,14 @@ public enum UnitSystem {
         US_DISPLAY.put(Dimension.TIME, "s");
     }
 
+    /** @return the name a scenario uses for this unit system: "metric" or "us" */
+    public String scenarioName() {
+        return this == METRIC ? "metric" : "us";
+    }
+
     /** @return the unit a value of this dimension is displayed in (SI unit when no display unit is set) */
     public Unit displayUnit(Dimension dimension) {
-        String symbol = (this == SI ? SI_DISPLAY : US_DISPLAY).get(dimension);
+        String symbol = (this == METRIC ? SI_DISPLAY : US_DISPLAY).get(dimension);
         if (symbol == null) {
             return new Unit(dimension.siSymbol(), dimension, 1.0, 0.0);
         }

@@ -300,7 +300,7 @@ public final class Units {
 
     /** @return the canonical symbols of a dimension, for error messages (metric units first) */
     public static String examplesOf(Dimension dimension) {
-        return examplesOf(dimension, UnitSystem.SI);
+        return examplesOf(dimension, UnitSystem.METRIC);
     }
 
     /**

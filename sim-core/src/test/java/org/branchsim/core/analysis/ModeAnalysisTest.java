@@ -173,8 +173,8 @@ class ModeAnalysisTest {
     /**
      * Participation factors (Perez-Arriaga, Verghese and Schweppe, IEEE Trans. PAS-101(9), 1982): they sum to
      * one per mode and vanish for states a mode does not reach. Block-diagonal: an undamped pilot oscillator
-     * x' = v, v' = -w^2 x (states prv.pilot.x, prv.pilot.v) beside a decoupled chamber; the oscillatory mode
-     * belongs to part prv.pilot and element prv only, with equal shares for x and v (for a 2x2 companion block
+     * x' = v, v' = -w^2 x (states reducer.pilot.x, reducer.pilot.v) beside a decoupled chamber; the oscillatory mode
+     * belongs to part reducer.pilot and element reducer only, with equal shares for x and v (for a 2x2 companion block
      * with lambda = +-i w, |phi_x psi_x| = |phi_v psi_v| = 1/2). Symmetric coupling [[a, b], [b, a]] of two
      * pressures has eigenvectors (1, 1) and (1, -1): each state takes half of each mode.
      */
@@ -182,12 +182,12 @@ class ModeAnalysisTest {
     void participationIsSummedPerPartAndPerElement() {
         double w = 2 * Math.PI * 100;
         List<Mode> modes = ModeAnalysis.of(new double[][] {{0, 1, 0}, {-w * w, 0, 0}, {0, 0, -50}},
-                List.of("prv.pilot.x", "prv.pilot.v", "prv.chamber.p"));
+                List.of("reducer.pilot.x", "reducer.pilot.v", "reducer.chamber.p"));
         Mode pilot = onlyOscillatory(modes);
         assertEquals(100.0, pilot.naturalFrequency(), 1e-9);
-        assertEquals("prv.pilot", pilot.name());
+        assertEquals("reducer.pilot", pilot.name());
         assertEquals(1.0, pilot.parts().get(0).share(), 1e-12);
-        assertEquals("prv", pilot.elements().get(0).name());
+        assertEquals("reducer", pilot.elements().get(0).name());
         assertEquals(0.5, pilot.participation().get(0).share(), 1e-9);
         assertEquals(0.5, pilot.participation().get(1).share(), 1e-9);
         assertEquals(0.0, pilot.participation().get(2).share(), 1e-12);

@@ -47,7 +47,7 @@ class FixtureClampTest {
                 run.scenario().metricsTo());
         assertEquals(1, metrics.size());
         ReducingValveMetrics m = metrics.get(0);
-        assertEquals("prv", m.id());
+        assertEquals("reducer", m.id());
         assertEquals(SETTING, m.setting(), 1.0);
         double landing = run.result().events().stream().filter(e -> e.kind().equals("contact"))
                 .mapToDouble(e -> e.time()).findFirst().orElseThrow();
@@ -63,7 +63,7 @@ class FixtureClampTest {
 
     @Test
     void energyBalanceClosesOnBothDemos() {
-        for (String demo : new String[] {"fixture-clamp", "regulation-bench"}) {
+        for (String demo : new String[] {"fixture-clamp", "regulation-characteristic"}) {
             SimulationResult r = DemoRuns.of(demo).result();
             assertTrue(r.energy().total(EnergyAccount.Kind.SUPPLY) > 1e3, demo + ": energy is supplied (pump or source)");
             assertTrue(r.energy().total(EnergyAccount.Kind.LOSS) > 0.5 * r.energy().total(EnergyAccount.Kind.SUPPLY),

@@ -38,7 +38,7 @@ class GripperChatterModesTest {
         assertTrue(op.converged());
         assertTrue(op.residual() < RESIDUAL_BOUND, op.residual() + " 1/s in " + op.worstState());
         // the pilot poppet floats at its equilibrium lift, passing the pilot flow (it is the mean of a chatter)
-        assertTrue(!op.held().containsKey("prv.pilot"), op.held().toString());
+        assertTrue(!op.held().containsKey("reducer.pilot"), op.held().toString());
         // a pilot-operated reducing valve regulates within a few percent of its setting at small demand
         // (REFERENCES.md: 1-3 %, common practice, no source); 5 % allows for the spring-chamber model
         double reduced = op.state()[c.states().stream().filter(st -> st.name().equals("reduced.p")).findFirst()
@@ -49,9 +49,9 @@ class GripperChatterModesTest {
         Mode least = modes.stream().filter(Mode::oscillatory).findFirst().orElseThrow();
         // participation factors (Perez-Arriaga, Verghese and Schweppe, IEEE Trans. PAS-101(9), 1982) put the
         // pilot poppet among the parts that take part most in the least-damped mode
-        assertTrue(least.parts().stream().limit(2).anyMatch(p -> p.name().equals("prv.pilot")),
+        assertTrue(least.parts().stream().limit(2).anyMatch(p -> p.name().equals("reducer.pilot")),
                 least.name() + " " + least.parts());
-        assertTrue(least.name().contains("prv.pilot"), least.name());
+        assertTrue(least.name().contains("reducer.pilot"), least.name());
         assertEquals(least.dampingRatio(), ModeAnalysis.minimumDampingRatio(c, op), 1e-12);
     }
 }

@@ -38,7 +38,7 @@ class ImplicitAgreementTest {
     }
 
     @ParameterizedTest
-    @CsvSource({"feed-stall, 0.6", "fixture-clamp, 0.5", "regulation-bench, 1.5"})
+    @CsvSource({"feed-stall, 0.6", "fixture-clamp, 0.5", "regulation-characteristic, 1.5"})
     void implicitMatchesHighOrderReference(String demo, double end) {
         SimulationResult implicit = run(demo, end, Method.IMPLICIT, RTOL);
         SimulationResult reference = run(demo, end, Method.REFERENCE, REFERENCE_RTOL);

@@ -68,6 +68,21 @@ class ScenarioProblemsTest {
         assertNotNull(y.circuit().signal("relief.poppet.x"));
     }
 
+    /** Old spellings are still accepted for one release, each with a located note naming the new one. */
+    @Test
+    void oldSpellingsAreAcceptedWithALocatedNote() throws IOException {
+        String text = minimal().replace("\"type\": \"meteringPath\"", "\"type\": \"valveEdge\"")
+                .replace("\"solver\":", "\"outputs\": { \"units\": \"SI\" },\n  \"solver\":");
+        Scenario s = ScenarioLoader.build("old.json", DocumentParser.parse("old.json", text, false));
+        assertEquals(2, s.notes().size(), s.notes().toString());
+        assertTrue(s.notes().get(0).startsWith("old.json:" + lineOf(text, "\"valveEdge\"") + ":"), s.notes().get(0));
+        assertTrue(s.notes().get(0).contains("\"valveEdge\" is the old name of \"meteringPath\""), s.notes().get(0));
+        assertTrue(s.notes().get(1).contains("\"SI\" is the old name of \"metric\""), s.notes().get(1));
+        assertEquals(org.branchsim.core.units.UnitSystem.METRIC, s.units());
+        Scenario now = ScenarioLoader.build("minimal.json", DocumentParser.parse("minimal.json", minimal(), false));
+        assertEquals(java.util.List.of(), now.notes());
+    }
+
     @Test
     void malformedJsonNamesLineAndColumn() throws IOException {
         String text = minimal().replace("\"bore\": \"40 mm\",", "\"bore\": \"40 mm\"");

@@ -80,10 +80,10 @@ class DiagnosisTest {
         assertEquals(1, r.findings().size(), r.findings().stream().map(OscillationFinding::name).toList().toString());
         OscillationFinding f = r.findings().get(0);
         assertEquals(OscillationFinding.Kind.CHATTER, f.kind());
-        assertEquals("prv.pilot", f.impactingMember());
+        assertEquals("reducer.pilot", f.impactingMember());
         List<Double> impacts = new ArrayList<>();
         for (EventRecord e : r.baseline().events()) {
-            if (e.owner().equals("prv.pilot") && e.kind().equals("seat") && !e.description().endsWith("(leaves)")
+            if (e.owner().equals("reducer.pilot") && e.kind().equals("seat") && !e.description().endsWith("(leaves)")
                     && f.window().contains(e.time())) {
                 impacts.add(e.time());
             }
@@ -94,14 +94,14 @@ class DiagnosisTest {
         }
         gaps.sort(Double::compare);
         double median = gaps.get(gaps.size() / 2);
-        double perCycle = f.impactsPerCycle().get("prv.pilot");
+        double perCycle = f.impactsPerCycle().get("reducer.pilot");
         assertEquals(1.0, median * f.frequency() * Math.round(perCycle), 0.03,
                 "median impact interval " + median + " s at " + f.frequency() + " Hz");
         // its mode at the operating point is the pilot poppet's, and it is unstable there
         assertNotNull(f.mode());
-        assertEquals("prv.pilot", f.mode().mode().parts().get(0).name());
+        assertEquals("reducer.pilot", f.mode().mode().parts().get(0).name());
         assertEquals(Mode.Verdict.UNSTABLE, f.mode().mode().verdict(MARGIN));
-        assertTrue(f.parts().contains("prv.pilot"), f.parts().toString());
+        assertTrue(f.parts().contains("reducer.pilot"), f.parts().toString());
     }
 
     @Test

@@ -66,7 +66,7 @@ class UnitConversionTest {
 
     @Test
     void displayUnitsRoundTrip() {
-        Unit bar = UnitSystem.SI.displayUnit(Dimension.PRESSURE);
+        Unit bar = UnitSystem.METRIC.displayUnit(Dimension.PRESSURE);
         Unit psi = UnitSystem.US.displayUnit(Dimension.PRESSURE);
         assertEquals("bar", bar.symbol());
         assertEquals("psi", psi.symbol());
@@ -129,7 +129,7 @@ class UnitConversionTest {
     void hintsListTheScenariosUnitSystemFirst() {
         Quantity.Parsed us = Quantity.parse("3000", Dimension.PRESSURE, UnitSystem.US);
         assertTrue(us.error().contains("(psi, ksi, "), us.error());
-        Quantity.Parsed metric = Quantity.parse("200", Dimension.PRESSURE, UnitSystem.SI);
+        Quantity.Parsed metric = Quantity.parse("200", Dimension.PRESSURE, UnitSystem.METRIC);
         assertTrue(metric.error().contains("(bar, Pa, kPa, MPa, GPa, mbar, psi, ksi)"), metric.error());
         Quantity.Parsed flow = Quantity.parse("5 gallons", Dimension.VOLUME_FLOW, UnitSystem.US);
         assertTrue(flow.error().contains("(gal/min, in^3/s, "), flow.error());

@@ -12,7 +12,7 @@ import org.junit.jupiter.api.Test;
  * one supply held at 80 bar, ramped to 250 bar (1 s to 3 s) at small demand, then, at 150 bar, each with its
  * demand valve opened to the same opening (4.5 s to 5 s).
  */
-class RegulationBenchTest {
+class RegulationCharacteristicTest {
 
     private static final double SETTING = 72e5;
     /** Common practice, no source: pilot-operated reducing valves hold within a few percent of setting. */
@@ -23,7 +23,7 @@ class RegulationBenchTest {
 
     @BeforeAll
     static void run() {
-        trace = DemoRuns.of("regulation-bench").result().trace();
+        trace = DemoRuns.of("regulation-characteristic").result().trace();
     }
 
     private static double supplyTime(double supplyBar) {
@@ -49,8 +49,8 @@ class RegulationBenchTest {
 
     @Test
     void directActingValveDroopsMoreThanPilotOperatedAtEqualFlow() {
-        double qPilot = trace.valueAt("prv.q", 4.95);
-        double qDirect = trace.valueAt("drv.q", 4.95);
+        double qPilot = trace.valueAt("pilotReducer.q", 4.95);
+        double qDirect = trace.valueAt("directReducer.q", 4.95);
         assertEquals(qPilot, qDirect, 0.1 * qPilot, "equal demand flows");
         assertTrue(qPilot > 5 * LPM, "a real demand: " + qPilot / LPM + " L/min");
         double droopPilot = trace.valueAt("pilotOut.p", 3.95) - trace.valueAt("pilotOut.p", 4.95);
@@ -64,7 +64,7 @@ class RegulationBenchTest {
     void pilotDrainFlowIsPositiveAndOfTheUsualOrderWhileRegulating() {
         // common practice, no source: a fraction of a litre to a couple of litres per minute
         for (double t : new double[] {0.9, 2.0, 3.9, 4.95}) {
-            double q = trace.valueAt("prv.drain.q", t);
+            double q = trace.valueAt("pilotReducer.drain.q", t);
             assertTrue(q > 0.1 * LPM && q < 3 * LPM, "drain flow " + q / LPM + " L/min at t = " + t);
         }
     }

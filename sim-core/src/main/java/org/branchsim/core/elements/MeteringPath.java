@@ -16,7 +16,7 @@ import org.branchsim.core.units.Dimension;
  * A = u(t) A_max with u from 0 (closed) to 1 (fully open), flow by {@link OrificeLaw}, positive from a to b.
  * The hydraulic diameter of the opening is taken as that of a round hole of the same area.
  */
-public final class ValveEdge implements Element {
+public final class MeteringPath implements Element {
     private final String id;
     private final Node a;
     private final Node b;
@@ -37,7 +37,7 @@ public final class ValveEdge implements Element {
      * @param cd discharge coefficient
      * @param initialOpening opening at t = 0, 0..1
      */
-    public ValveEdge(String id, Node a, Node b, double maxArea, double cd, double initialOpening) {
+    public MeteringPath(String id, Node a, Node b, double maxArea, double cd, double initialOpening) {
         this.id = id;
         this.a = a;
         this.b = b;

@@ -40,13 +40,14 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /**
- * {@code branchsim bench}: runs scenarios several times in one JVM after warm-up, per integration method,
- * and writes wall times, work counters, accuracy against a tight reference and peak heap to bench.json and
- * bench.csv; then times a parallel sweep of variants of the first scenario.
+ * {@code branchsim timing} (formerly {@code bench}, still accepted for one release): runs scenarios several
+ * times in one JVM after warm-up, per integration method, and writes wall times, work counters, accuracy against
+ * a tight reference and peak heap to timing.json and timing.csv; then times a parallel sweep of variants of the first scenario.
  */
-@Command(name = "bench", mixinStandardHelpOptions = true,
-        description = "Measure run time, solver work, accuracy and memory per scenario and method; write bench.json and bench.csv.")
-public final class BenchCommand implements Callable<Integer> {
+@Command(name = "timing", aliases = "bench", mixinStandardHelpOptions = true,
+        description = "Measure run time, solver work, accuracy and memory per scenario and method; write timing.json "
+                + "and timing.csv (\"bench\" is the old name of this command).")
+public final class TimingCommand implements Callable<Integer> {
 
     @Parameters(paramLabel = "SCENARIO", arity = "0..*",
             description = "Scenarios to measure (default: the demos in ./scenarios or in scenarios/ beside the program).")
@@ -72,7 +73,7 @@ public final class BenchCommand implements Callable<Integer> {
             description = "Variants in the sweep benchmark of the first scenario, 0 to skip (default ${DEFAULT-VALUE}).")
     private int sweepVariants;
 
-    @Option(names = "--sweep-parameter", paramLabel = "PATH", defaultValue = "elements.prv.dampingOrifice.diameter",
+    @Option(names = "--sweep-parameter", paramLabel = "PATH", defaultValue = "elements.reducer.dampingOrifice.diameter",
             description = "Parameter varied in the sweep benchmark (default ${DEFAULT-VALUE}).")
     private String sweepParameter;
 
@@ -82,9 +83,9 @@ public final class BenchCommand implements Callable<Integer> {
     /** Most timed or warm-up runs per scenario and method. */
     static final int MAX_RUNS = 1000;
     /** The demos measured when no scenario is given, looked for in ./scenarios and beside the program. */
-    static final List<String> DEFAULT_DEMOS = List.of("fixture-clamp.json", "regulation-bench.json", "feed-stall.json");
+    static final List<String> DEFAULT_DEMOS = List.of("fixture-clamp.json", "regulation-characteristic.json", "feed-stall.json");
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = "out/bench", description = "Output folder (default ${DEFAULT-VALUE}).")
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = "out/timing", description = "Output folder (default ${DEFAULT-VALUE}).")
     private Path out;
 
     @CommandLine.Spec
@@ -92,6 +93,11 @@ public final class BenchCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (spec.commandLine().getParent() != null
+                && spec.commandLine().getParent().getParseResult().originalArgs().contains("bench")) {
+            spec.commandLine().getErr().println("note: \"bench\" is the old name of \"timing\"; it is still accepted "
+                    + "in this release and will be refused in the next");
+        }
         OptionChecks.count("--runs", runs, 1, MAX_RUNS);
         OptionChecks.count("--warmup", warmup, 0, MAX_RUNS);
         OptionChecks.count("--sweep-variants", sweepVariants, 0, OptionChecks.MAX_VARIANTS);
@@ -206,10 +212,10 @@ public final class BenchCommand implements Callable<Integer> {
         if (sweepVariants > 0) {
             root.set("sweep", sweep(files.get(0), end, n, w));
         }
-        folder.writeText("bench.json", MetricsReport.toJson(root));
-        folder.writeText("bench.csv", csv.toString());
+        folder.writeText("timing.json", MetricsReport.toJson(root));
+        folder.writeText("timing.csv", csv.toString());
         folder.commit();
-        w.printf("results written to %s (bench.json, bench.csv)%n", folder.dir());
+        w.printf("results written to %s (timing.json, timing.csv)%n", folder.dir());
     }
 
     /** @return the settings with the --end-time override, checked against the scenario's output grid */
@@ -250,7 +256,7 @@ public final class BenchCommand implements Callable<Integer> {
         List<Path> candidates = new ArrayList<>();
         candidates.add(Path.of("scenarios"));
         try {
-            java.security.CodeSource source = BenchCommand.class.getProtectionDomain().getCodeSource();
+            java.security.CodeSource source = TimingCommand.class.getProtectionDomain().getCodeSource();
             if (source != null) {
                 Path p = Path.of(source.getLocation().toURI()).toAbsolutePath();
                 for (int up = 0; up < 4 && p != null; up++, p = p.getParent()) {
@@ -267,10 +273,10 @@ public final class BenchCommand implements Callable<Integer> {
                 return demos;
             }
         }
-        throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "bench: expected the default demos ("
+        throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "timing: expected the default demos ("
                 + String.join(", ", DEFAULT_DEMOS) + ") in ./scenarios or beside the program, found none in "
                 + looked.stream().distinct().map(Path::toString).collect(java.util.stream.Collectors.joining(", "))
-                + "; pass scenario files: branchsim bench SCENARIO...");
+                + "; pass scenario files: branchsim timing SCENARIO...");
     }
 
     private ObjectNode sweep(Path file, Double end, int n, PrintWriter w) {
