@@ -24,7 +24,8 @@ import org.branchsim.core.solve.OperatingPointSolver;
  * and refines by bisection in log(v): the <em>threshold</em> where zeta crosses 0 (the oscillation stops growing)
  * and the <em>margin value</em> where zeta reaches the margin. The recommended value lies
  * {@link #MARGIN_OVERSHOOT} further from the current value than the margin value, in log(v), so that parameter
- * scatter of that size keeps zeta above the margin; it is rounded to three significant digits away from the
+ * scatter of that size keeps zeta above the margin (for a parameter that is zero now, such as a damping left at its
+ * default, {@link #MARGIN_OVERSHOOT} above the margin value); it is rounded to three significant digits away from the
  * current value and checked again.
  */
 public final class StabilitySearch {
@@ -189,11 +190,8 @@ public final class StabilitySearch {
 
     private Outcome recommend(RemedyKnob knob, Direction dir, double zetaNow, double threshold, double marginValue,
                               double best) {
-        double from = knob.absolute() ? knob.lowest() : knob.current();
-        double target = Math.exp(Math.log(marginValue) + MARGIN_OVERSHOOT * (Math.log(marginValue) - Math.log(from)));
-        if (knob.absolute() && target < marginValue) {
-            target = marginValue;
-        }
+        double target = knob.absolute() ? marginValue * (1 + MARGIN_OVERSHOOT)
+                : Math.exp(Math.log(marginValue) + MARGIN_OVERSHOOT * (Math.log(marginValue) - Math.log(knob.current())));
         target = Math.max(knob.lowest(), Math.min(knob.highest(), target));
         double rounded = roundAway(knob, target, dir);
         Damping d = damping(knob, rounded);
