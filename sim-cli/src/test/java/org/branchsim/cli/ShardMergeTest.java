@@ -231,6 +231,10 @@ class ShardMergeTest {
         List<String> two = shards(Files.createDirectory(dir.resolve("two")), 2, study);
         List<String> three = shards(Files.createDirectory(dir.resolve("three")), 3, study);
         Path out = dir.resolve("merged");
+        RunCommandTest.Outcome help = RunCommandTest.run("merge", "--help");
+        assertEquals(0, help.code(), help.err());
+        assertTrue(help.out().contains("SHARD_FOLDER...") && help.out().contains("--out=DIR"), help.out());
+        assertEquals(2, RunCommandTest.run("merge").code(), "at least one folder");
 
         String missing = refused(out, "SHARD_FOLDER", "merge", two.get(0), "--out", out.toString());
         assertTrue(missing.contains("expected all 2 shards") && missing.contains("missing 1/2"), missing);
