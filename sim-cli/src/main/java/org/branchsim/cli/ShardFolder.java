@@ -17,7 +17,6 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Objects;
 import java.util.stream.Collectors;
 import org.branchsim.core.results.Trace;
 import org.branchsim.core.study.Variant;
@@ -271,10 +270,5 @@ final class ShardFolder {
             throw reader.bad("variants", "only the shard's variants", "samples of variants " + traces.keySet());
         }
         return out;
-    }
-
-    /** @return true when two shards' definitions are the same study */
-    static boolean sameStudy(Content a, Content b) {
-        return Objects.equals(a.study(), b.study()) && a.studyJson().equals(b.studyJson());
     }
 }

@@ -21,11 +21,6 @@ final class ShardJson {
         this.file = file;
     }
 
-    /** @return the file being read */
-    Path file() {
-        return file;
-    }
-
     /** @return the field, which must be present and not null */
     JsonNode field(JsonNode parent, String name) {
         JsonNode v = parent == null ? null : parent.get(name);
