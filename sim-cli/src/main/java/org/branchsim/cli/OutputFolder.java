@@ -57,7 +57,7 @@ public final class OutputFolder implements AutoCloseable {
     /** Files a branchsim command writes, for folders written before the marker existed. */
     private static final Pattern OUTPUT_NAME = Pattern.compile(
             "(trace\\.csv|metrics\\.json|summary\\.(txt|csv)|runs\\.csv|statistics\\.csv|modes\\.(json|csv)"
-                    + "|diagnosis\\.(txt|json)|bench\\.(json|csv)|[a-z0-9][a-z0-9.-]*\\.png|\\..+\\.tmp)");
+                    + "|diagnosis\\.(txt|json)|(bench|timing)\\.(json|csv)|[a-z0-9][a-z0-9.-]*\\.png|\\..+\\.tmp)");
     private static final Set<OutputFolder> OPEN = ConcurrentHashMap.newKeySet();
     private static final AtomicLong SEQUENCE = new AtomicLong();
     private static final long PID = ProcessHandle.current().pid();

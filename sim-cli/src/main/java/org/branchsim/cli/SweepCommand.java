@@ -3,7 +3,6 @@ package org.branchsim.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -14,6 +13,7 @@ import java.util.regex.Pattern;
 import org.branchsim.core.elements.ReducingValve;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Located;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.scenario.ScenarioLoader;
@@ -23,7 +23,6 @@ import org.branchsim.core.study.ValueText;
 import org.branchsim.core.study.Variant;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Quantity;
-import org.branchsim.plots.TraceCharts;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -68,33 +67,50 @@ public final class SweepCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/<scenario name>-sweep).")
     private Path out;
 
+    @Option(names = "--shard", paramLabel = "K/N",
+            description = "Run only shard K of N (variant i goes to shard (i mod N) + 1) and write a shard folder "
+                    + "(default: out/<scenario name>-sweep-shard-K-of-N) for 'branchsim merge'.")
+    private String shard;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
+        Shard part = shard == null ? null : Shard.parse(shard);
         Scenario base = scenario.load();
         int n = OptionChecks.threads(threads);
-        try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-sweep"),
-                scenario.file())) {
+        Path target = out != null ? out
+                : Path.of("out", base.name() + "-sweep" + (part == null ? "" : part.folderSuffix()));
+        try (OutputFolder folder = new OutputFolder(target, scenario.file())) {
             Map<String, List<Object>> axes = axes(base);
             List<Variant> variants = grid(axes);
+            if (part != null) {
+                part.requireAtMost(variants.size());
+            }
             List<String> overlay = overlaySignals(base);
             List<String> predicted = StudyTable.columnsOf(base);
             String metric = rankBy != null ? StudyTable.resolve("--rank-by", rankBy, predicted)
                     : predicted.stream().filter(c -> c.contains("overshoot")).findFirst().orElse(predicted.get(0));
+            SweepDefinition study = SweepDefinition.of(base.name(), StudyDefinition.sha256(scenario.file()),
+                    base.units(), axes, metric, descending, overlay.stream()
+                            .map(s -> new Trace.Column(s, base.circuit().signal(s).dimension())).toList());
+            List<Variant> toRun = part == null ? variants : part.select(variants);
             PrintWriter err = spec.commandLine().getErr();
             long start = System.nanoTime();
-            List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), variants, n,
-                    done -> progress(err, done, variants.size(), start), o -> StudyTable.Row.of(o, base.units(), overlay));
+            List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), toRun, n,
+                    done -> progress(err, done, toRun.size(), start), o -> StudyTable.Row.of(o, base.units(), overlay));
             err.println();
-            printRanked(rows, metric);
-            requireOneSuccess(rows);
-            List<String> cols = StudyTable.columns(rows);
-            folder.writeText("summary.csv", StudyTable.csv(new ArrayList<>(axes.keySet()), rows, cols));
-            writeOverlays(base, rows, overlay, folder);
-            folder.commit();
             PrintWriter w = spec.commandLine().getOut();
+            if (part == null) {
+                SweepReport.write(study, rows, folder, w);
+            } else {
+                ShardFolder.write(folder, part, study, rows);
+            }
+            folder.commit();
+            if (part != null) {
+                ShardSummary.print(study, part, rows, folder.dir(), w);
+            }
             folder.report(w);
             w.println("Caution: " + Cautions.SHORT);
         }
@@ -301,48 +317,6 @@ public final class SweepCommand implements Callable<Integer> {
                 err.printf(Locale.ROOT, "\rvariants %d done, %.0f s so far   ", done, elapsed);
             }
             err.flush();
-        }
-    }
-
-    private void writeOverlays(Scenario base, List<StudyTable.Row> rows, List<String> overlay, OutputFolder folder) {
-        List<StudyTable.Row> ok = rows.stream().filter(StudyTable.Row::ok).toList();
-        if (ok.isEmpty()) {
-            return;
-        }
-        for (String signal : overlay) {
-            List<TraceCharts.Labelled> runs = new ArrayList<>();
-            for (StudyTable.Row r : ok) {
-                runs.add(new TraceCharts.Labelled(label(r.variant()), r.overlay()));
-            }
-            String file = "overlay-" + FigureSet.slug(signal) + ".png";
-            folder.write(file, p -> TraceCharts.compare(runs, signal, base.name() + " sweep: " + signal, base.units(), p));
-        }
-    }
-
-    static String label(Variant v) {
-        List<String> parts = new ArrayList<>();
-        v.values().forEach((k, val) -> parts.add(k.substring(k.lastIndexOf('.', k.lastIndexOf('.') - 1) + 1) + "=" + val));
-        return String.join(", ", parts);
-    }
-
-    private void printRanked(List<StudyTable.Row> rows, String metric) {
-        PrintWriter w = spec.commandLine().getOut();
-        List<Integer> order = new ArrayList<>();
-        for (int i = 0; i < rows.size(); i++) {
-            order.add(i);
-        }
-        if (metric != null) {
-            order.sort(Comparator.comparingDouble(i -> {
-                Double v = rows.get(i).metrics().get(metric);
-                return v == null || !Double.isFinite(v) ? Double.MAX_VALUE : (descending ? -v : v);
-            }));
-        }
-        w.printf("%d variants, ranked by %s%s:%n", rows.size(), metric, descending ? " (largest first)" : "");
-        for (int i : order) {
-            StudyTable.Row r = rows.get(i);
-            Double v = metric == null ? null : r.metrics().get(metric);
-            w.printf(Locale.ROOT, "  #%-3d %-50s %s%n", r.variant().index(), label(r.variant()),
-                    r.ok() ? (v == null ? "-" : String.format(Locale.ROOT, "%.4g", v)) : "FAILED: " + r.error());
         }
     }
 }

@@ -2,18 +2,14 @@ package org.branchsim.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.study.StudyRunner;
 import org.branchsim.core.study.ToleranceStudy;
-import org.branchsim.core.study.ValueText;
 import org.branchsim.core.study.Variant;
-import org.branchsim.plots.HistogramChart;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -47,16 +43,24 @@ public final class ToleranceCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/<scenario name>-tolerance).")
     private Path out;
 
+    @Option(names = "--shard", paramLabel = "K/N",
+            description = "Run only shard K of N (run i goes to shard (i mod N) + 1; every run's values are drawn "
+                    + "as in the whole study) and write a shard folder (default: "
+                    + "out/<scenario name>-tolerance-shard-K-of-N) for 'branchsim merge'.")
+    private String shard;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
         OptionChecks.count("--runs", runs, 2, OptionChecks.MAX_VARIANTS);
+        Shard part = shard == null ? null : Shard.parse(shard).requireAtMost(runs);
         int n = OptionChecks.threads(threads);
         Scenario base = scenario.load();
-        try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", base.name() + "-tolerance"),
-                scenario.file())) {
+        Path target = out != null ? out
+                : Path.of("out", base.name() + "-tolerance" + (part == null ? "" : part.folderSuffix()));
+        try (OutputFolder folder = new OutputFolder(target, scenario.file())) {
             List<ToleranceStudy.Parameter> params = ToleranceStudy.parameters(base.document());
             if (params.isEmpty()) {
                 throw new BranchsimException(ErrorKey.BAD_ARGUMENT, base.file() + ":" + base.document().line() + ":"
@@ -67,54 +71,30 @@ public final class ToleranceCommand implements Callable<Integer> {
             List<String> predicted = StudyTable.columnsOf(base);
             String metric = histogram != null ? StudyTable.resolve("--histogram", histogram, predicted)
                     : predicted.stream().filter(c -> c.contains("overshoot")).findFirst().orElse(predicted.get(0));
+            ToleranceDefinition study = new ToleranceDefinition(base.name(), StudyDefinition.sha256(scenario.file()),
+                    runs, seed, metric, params);
+            // every run's values come from the one generator in run order; a shard keeps its own runs
             List<Variant> variants = ToleranceStudy.draw(params, runs, seed);
+            List<Variant> toRun = part == null ? variants : part.select(variants);
             PrintWriter err = spec.commandLine().getErr();
             long start = System.nanoTime();
-            List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), variants, n,
-                    d -> SweepCommand.progress(err, d, runs, start), o -> StudyTable.Row.of(o, base.units(), List.of()));
+            List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), toRun, n,
+                    d -> SweepCommand.progress(err, d, toRun.size(), start),
+                    o -> StudyTable.Row.of(o, base.units(), List.of()));
             err.println();
-            SweepCommand.requireOneSuccess(rows);
-            List<String> cols = StudyTable.columns(rows);
-            List<ToleranceStudy.Statistics> stats = new ArrayList<>();
-            for (String c : cols) {
-                stats.add(ToleranceStudy.statistics(c, values(rows, c)));
-            }
-            folder.writeText("runs.csv", StudyTable.csv(params.stream().map(ToleranceStudy.Parameter::path).toList(),
-                    rows, cols));
-            StringBuilder sum = new StringBuilder("metric,runs,mean,p5,p95,min,max\n");
-            for (ToleranceStudy.Statistics s : stats) {
-                sum.append(StudyTable.field(s.metric())).append(',').append(s.count()).append(',')
-                        .append(StudyTable.field(s.mean())).append(',').append(StudyTable.field(s.p5())).append(',')
-                        .append(StudyTable.field(s.p95())).append(',').append(StudyTable.field(s.min())).append(',')
-                        .append(StudyTable.field(s.max())).append('\n');
-            }
-            folder.writeText("statistics.csv", sum.toString());
-            double[] values = java.util.Arrays.stream(values(rows, metric)).filter(Double::isFinite).toArray();
-            if (values.length > 0) {
-                folder.write("histogram-" + FigureSet.slug(metric) + ".png", p -> HistogramChart.save(values,
-                        Math.max(5, (int) Math.ceil(Math.sqrt(values.length))),
-                        base.name() + ": " + metric + " over " + values.length + " runs", metric, p));
+            PrintWriter w = spec.commandLine().getOut();
+            if (part == null) {
+                ToleranceReport.write(study, rows, folder, w);
+            } else {
+                ShardFolder.write(folder, part, study, rows);
             }
             folder.commit();
-            PrintWriter w = spec.commandLine().getOut();
-            w.printf("%s: %d runs, seed %d, %d failed; toleranced values:%n", base.name(), runs, seed,
-                    rows.stream().filter(r -> !r.ok()).count());
-            for (ToleranceStudy.Parameter p : params) {
-                w.printf(Locale.ROOT, "  %s: %s, drawn uniformly from %s to %s %s%n", p.path(), p.tolerance().nominal(),
-                        ValueText.format(p.tolerance().low()), ValueText.format(p.tolerance().high()), p.tolerance().unit());
-            }
-            w.printf("%-44s %10s %10s %10s %10s %10s%n", "metric", "mean", "P5", "P95", "min", "max");
-            for (ToleranceStudy.Statistics s : stats) {
-                w.printf(Locale.ROOT, "%-44s %10.4g %10.4g %10.4g %10.4g %10.4g%n", s.metric(), s.mean(), s.p5(), s.p95(),
-                        s.min(), s.max());
+            if (part != null) {
+                ShardSummary.print(study, part, rows, folder.dir(), w);
             }
             folder.report(w);
             w.println("Caution: " + Cautions.SHORT);
         }
         return BranchsimMain.OK;
-    }
-
-    private static double[] values(List<StudyTable.Row> rows, String metric) {
-        return rows.stream().mapToDouble(r -> r.metrics().getOrDefault(metric, Double.NaN)).toArray();
     }
 }

@@ -19,7 +19,7 @@ import org.junit.jupiter.params.provider.CsvSource;
  * The implicit method's trace agrees with Hipparchus's Dormand-Prince 8(5,3) run at rtol 1e-10 (a
  * general-purpose reference integrator): the largest error of every pressure, relative to that signal's
  * range, stays below 10 times the requested tolerance, and the same events happen in the same order at the
- * same times. Runs are shortened to keep the suite fast; {@code branchsim bench} reports full lengths.
+ * same times. Runs are shortened to keep the suite fast; {@code branchsim timing} reports full lengths.
  */
 class ImplicitAgreementTest {
 
