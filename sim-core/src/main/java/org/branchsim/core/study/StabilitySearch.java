@@ -132,7 +132,8 @@ public final class StabilitySearch {
 
     /**
      * @param knob the parameter to move
-     * @return what the linear model says in each direction the knob can move (both, or only up from zero)
+     * @return what the linear model says in each direction the knob's range leaves room for (both; only up from
+     *         zero; only down for a metering width already at its full size)
      */
     public List<Outcome> search(RemedyKnob knob) {
         double[] grid = new double[GRID];
@@ -143,8 +144,10 @@ public final class StabilitySearch {
         }
         Damping now = damping(knob, knob.current());
         List<Outcome> out = new ArrayList<>();
-        out.add(walk(knob, grid, now, Direction.RAISE));
-        if (!knob.absolute()) {
+        if (knob.highest() > knob.current() * (1 + 1e-9)) {
+            out.add(walk(knob, grid, now, Direction.RAISE));
+        }
+        if (!knob.absolute() && knob.lowest() < knob.current() * (1 - 1e-9)) {
             out.add(walk(knob, grid, now, Direction.LOWER));
         }
         return out;
