@@ -6,11 +6,14 @@ import java.util.List;
 import org.branchsim.core.fluid.Fluid;
 
 /**
- * A hydraulic circuit ready to simulate: nodes, elements, the state layout they declared, their signals,
- * scheduled inputs, energy accounts and discontinuities. It evaluates dy/dt = f(t, y). A circuit holds the
- * modes of its moving members, so one instance serves one run at a time.
+ * A hydraulic circuit ready to simulate, built once by {@link CircuitBuilder} and never changed afterwards:
+ * nodes, elements, the state layout they declared (SI values, node pressures first), their signals, scheduled
+ * inputs with their fixed schedules, energy accounts, moving members and discontinuities. It holds no state of
+ * any run: a run's member modes, impulse ledger and work buffers belong to the solver's per-run engine, which
+ * evaluates dy/dt = f(t, y) through {@link #evaluate}. So one model may be run many times, and on many threads
+ * at once.
  */
-public final class Circuit {
+public final class CircuitModel {
 
     private final String name;
     private final Fluid fluid;
@@ -20,19 +23,17 @@ public final class Circuit {
     private final List<SignalHandle> signals;
     private final List<EnergyAccount> accounts;
     private final List<ScheduledInput> inputs;
+    private final List<Member> members;
     private final List<Discontinuity> discontinuities;
     private final double[] initialState;
     private final EnergyAccount compressionAccount;
     private final EnergyAccount[] tankAccounts;
-    private final Evaluation work;
-    private final double[] impulses;
-    private final Evaluation viewWork;
     private final List<int[]> couplings;
 
-    Circuit(String name, Fluid fluid, List<Node> nodes, List<Element> elements, List<StateSlot> states,
-            double[] initialState, List<SignalHandle> signals, List<EnergyAccount> accounts,
-            List<ScheduledInput> inputs, List<Discontinuity> discontinuities, EnergyAccount compressionAccount,
-            EnergyAccount[] tankAccounts, List<int[]> couplings) {
+    CircuitModel(String name, Fluid fluid, List<Node> nodes, List<Element> elements, List<StateSlot> states,
+                 double[] initialState, List<SignalHandle> signals, List<EnergyAccount> accounts,
+                 List<ScheduledInput> inputs, List<Member> members, List<Discontinuity> discontinuities,
+                 EnergyAccount compressionAccount, EnergyAccount[] tankAccounts, List<int[]> couplings) {
         this.name = name;
         this.fluid = fluid;
         this.nodes = nodes.toArray(new Node[0]);
@@ -42,13 +43,21 @@ public final class Circuit {
         this.signals = List.copyOf(signals);
         this.accounts = List.copyOf(accounts);
         this.inputs = List.copyOf(inputs);
-        this.discontinuities = List.copyOf(discontinuities);
+        this.members = List.copyOf(members);
+        List<Discontinuity> all = new ArrayList<>(discontinuities);
+        for (ScheduledInput in : this.inputs) {
+            for (double corner : in.corners()) {
+                all.add(new ScheduleCorner(in.name(), corner));
+            }
+        }
+        this.discontinuities = Collections.unmodifiableList(all);
         this.compressionAccount = compressionAccount;
         this.tankAccounts = tankAccounts.clone();
-        this.work = new Evaluation(this.nodes.length);
-        this.impulses = new double[this.accounts.size()];
-        this.viewWork = new Evaluation(this.nodes.length);
-        this.couplings = List.copyOf(couplings);
+        List<int[]> blocks = new ArrayList<>();
+        for (int[] block : couplings) {
+            blocks.add(block.clone());
+        }
+        this.couplings = Collections.unmodifiableList(blocks);
     }
 
     /** @return the circuit's (scenario's) name */
@@ -62,12 +71,16 @@ public final class Circuit {
     }
 
     /**
-     * @return for each element, the solver indices of the states it reads or writes (its own states and the
-     *         pressures of its ports): states in one block may depend on each other, states in no common block
-     *         do not (the structure of the Jacobian)
+     * @return for each element, the positions in the state vector of the states it reads or writes (its own
+     *         states and the pressures of its ports): states in one block may depend on each other, states in no
+     *         common block do not (the structure of the Jacobian). For the solver layer; the arrays are copies.
      */
     public List<int[]> couplings() {
-        return couplings;
+        List<int[]> copy = new ArrayList<>();
+        for (int[] block : couplings) {
+            copy.add(block.clone());
+        }
+        return copy;
     }
 
     /** @return the number of states */
@@ -75,12 +88,12 @@ public final class Circuit {
         return states.size();
     }
 
-    /** @return the states in solver order */
+    /** @return the states in the order of the state vector */
     public List<StateSlot> states() {
         return states;
     }
 
-    /** @return a copy of the initial state vector */
+    /** @return a copy of the initial state vector, SI */
     public double[] initialState() {
         return initialState.clone();
     }
@@ -105,23 +118,22 @@ public final class Circuit {
         return accounts;
     }
 
-    /** @return the scheduled inputs */
+    /** @return the scheduled inputs, their schedules fixed */
     public List<ScheduledInput> inputs() {
         return inputs;
     }
 
+    /** @return the moving members that seats or stops can hold, in the order of a run's mode vector */
+    public List<Member> members() {
+        return members;
+    }
+
     /**
      * @return the discontinuities the solver must watch: the elements' own, and one per corner of every
-     *         scheduled input as the schedule stands now
+     *         scheduled input
      */
     public List<Discontinuity> discontinuities() {
-        List<Discontinuity> all = new ArrayList<>(discontinuities);
-        for (ScheduledInput in : inputs) {
-            for (double corner : in.corners()) {
-                all.add(new ScheduleCorner(in.name(), corner));
-            }
-        }
-        return Collections.unmodifiableList(all);
+        return discontinuities;
     }
 
     /**
@@ -157,34 +169,47 @@ public final class Circuit {
         return null;
     }
 
+    /** @return the node with that id, or null */
+    public Node node(String id) {
+        for (Node n : nodes) {
+            if (n.id().equals(id)) {
+                return n;
+            }
+        }
+        return null;
+    }
+
     /**
-     * Computes dy/dt.
+     * A work buffer for one run (the solver's per-run engine holds it): it reads member modes from, writes them
+     * to, and books impulse energies into the run's own arrays.
      *
+     * @param modes the run's member modes, in {@link #members()} order
+     * @param impulses the run's impulse ledger, J, in {@link #accounts()} order
+     * @return the work buffer
+     */
+    public Evaluation workspace(Member.Mode[] modes, double[] impulses) {
+        if (modes.length != members.size() || impulses.length != accounts.size()) {
+            throw new IllegalArgumentException("a run of " + name + " needs " + members.size() + " member modes and "
+                    + accounts.size() + " impulse accounts, found " + modes.length + " and " + impulses.length);
+        }
+        return new Evaluation(nodes, modes, impulses);
+    }
+
+    /**
+     * Evaluates the equations at (t, y) into a run's work buffer: every element, then the nodes'
+     * dp/dt = beta_e(p) / V * (sum of inflows - dV/dt).
+     *
+     * @param work the run's work buffer
      * @param t time, s
      * @param y state, SI
-     * @param yDot output: derivative, SI per second
+     * @param yDot output: derivative, SI per second (or null)
+     * @param signalOut output: every signal, SI, in {@link #signals()} order (or null)
+     * @param powerOut output: the power into every account, W, in {@link #accounts()} order (or null)
      */
-    public void derivatives(double t, double[] y, double[] yDot) {
-        evaluate(t, y, yDot, null, null);
-    }
-
-    /** @return the values of all signals at (t, y), SI, in {@link #signals()} order */
-    public double[] sampleSignals(double t, double[] y) {
-        double[] out = new double[signals.size()];
-        evaluate(t, y, new double[y.length], out, null);
-        return out;
-    }
-
-    /** @return the power flowing into each energy account at (t, y), W, in {@link #accounts()} order */
-    public double[] samplePowers(double t, double[] y) {
-        double[] out = new double[accounts.size()];
-        evaluate(t, y, new double[y.length], null, out);
-        return out;
-    }
-
-    private void evaluate(double t, double[] y, double[] yDot, double[] signalOut, double[] powerOut) {
+    public void evaluate(Evaluation work, double t, double[] y, double[] yDot, double[] signalOut,
+                         double[] powerOut) {
         Evaluation e = work;
-        e.reset(t, y, yDot, signalOut, powerOut, nodes);
+        e.reset(t, y, yDot, signalOut, powerOut);
         for (Element element : elements) {
             element.evaluate(e);
         }
@@ -204,45 +229,14 @@ public final class Circuit {
         }
     }
 
-    /** @return a read-only view of (t, y) for switching functions; valid until the next call on this circuit */
-    public StateView view(double t, double[] y) {
-        viewWork.reset(t, y, null, null, null, nodes);
-        return viewWork;
-    }
-
-    /** @return an editable view of (t, y); edits write into {@code y} */
-    public StateEditor editor(double t, double[] y) {
-        Evaluation e = new Evaluation(nodes.length);
-        e.reset(t, y, null, null, null, nodes);
-        e.impulses(impulses);
-        return e;
-    }
-
-    /** @return energy booked instantly at events so far, J, per account in {@link #accounts()} order */
-    public double[] impulses() {
-        return impulses.clone();
-    }
-
-    /** Clears the impulse energies booked at events (start of a run). */
-    public void clearImpulses() {
-        java.util.Arrays.fill(impulses, 0.0);
-    }
-
-    /** Sets the initial modes of members that start against seats or stops. */
-    public void initialiseModes(double t, double[] y) {
-        StateView v = view(t, y);
-        for (Element element : elements) {
-            element.initialiseModes(v);
-        }
-    }
-
-    /** @return the node with that id, or null */
-    public Node node(String id) {
-        for (Node n : nodes) {
-            if (n.id().equals(id)) {
-                return n;
-            }
-        }
-        return null;
+    /**
+     * Points a run's work buffer at (t, y) without evaluating anything, to read it (switching functions) or edit
+     * it (events: edits write into {@code y}).
+     *
+     * @return the work buffer, as a view and editor of (t, y)
+     */
+    public StateEditor at(Evaluation work, double t, double[] y) {
+        work.reset(t, y, null, null, null);
+        return work;
     }
 }
