@@ -109,7 +109,7 @@ public final class DiagnoseCommand implements Callable<Integer> {
         }
         List<String> signals = new ArrayList<>();
         signals.add(f.dominant().signal());
-        ReducingValve.firstOutletSignal(r.baseline().circuit()).ifPresent(o -> {
+        ReducingValve.firstOutletSignal(r.baseline().model()).ifPresent(o -> {
             if (!signals.contains(o)) {
                 signals.add(o);
             }

@@ -13,9 +13,8 @@ import org.branchsim.core.analysis.Mode;
 import org.branchsim.core.analysis.ModeAnalysis;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
-import org.branchsim.core.model.Circuit;
-import org.branchsim.core.model.StateSlot;
-import org.branchsim.core.parts.TravelLimitedMass;
+import org.branchsim.core.model.CircuitModel;
+import org.branchsim.core.model.Member;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.solve.OperatingPoint;
@@ -101,7 +100,7 @@ public final class ModesCommand implements Callable<Integer> {
 
     private int report(Scenario s, double t, double zeta, OutputFolder folder) {
         SimulationResult r = Simulator.run(s.circuit(), s.solver().withEndTime(t));
-        Circuit circuit = r.circuit();
+        CircuitModel circuit = s.circuit();
         PrintWriter w = spec.commandLine().getOut();
         ObjectNode root = MetricsReport.mapper().createObjectNode();
         root.put("scenario", s.name());
@@ -109,12 +108,12 @@ public final class ModesCommand implements Callable<Integer> {
         root.put("margin", zeta);
         root.put("caution", Cautions.SHORT);
         List<Mode> modes;
-        Map<String, TravelLimitedMass.Mode> held;
+        Map<String, Member.Mode> held;
         OperatingPoint op = null;
         String about;
         if (onTrajectory) {
-            modes = ModeAnalysis.onTrajectory(circuit, t, r.finalState());
-            held = OperatingPointSolver.heldMembers(circuit);
+            modes = ModeAnalysis.onTrajectory(r);
+            held = r.description().finalModes();
             about = "trajectory";
             w.printf(Locale.ROOT, "modes of %s linearised on the trajectory at t = %s s: about the simulated state, "
                     + "which is not an operating point where the circuit moves or oscillates (indicative only)%n",
@@ -137,7 +136,7 @@ public final class ModesCommand implements Callable<Integer> {
                         + "their values at t");
             }
             root.put("linearisedAbout", "the operating point at t (f(y) = 0, inputs frozen at t)");
-            root.set("operatingPoint", operatingPoint(op, circuit, from, t));
+            root.set("operatingPoint", operatingPoint(op, from, t));
         }
         w.println("held members: " + held(held));
         root.set("heldMembers", heldJson(held));
@@ -200,7 +199,7 @@ public final class ModesCommand implements Callable<Integer> {
         return zeta;
     }
 
-    private static ObjectNode operatingPoint(OperatingPoint op, Circuit circuit, double from, double to) {
+    private static ObjectNode operatingPoint(OperatingPoint op, double from, double to) {
         ObjectNode o = MetricsReport.mapper().createObjectNode();
         o.put("converged", op.converged());
         o.put("iterations", op.iterations());
@@ -213,10 +212,7 @@ public final class ModesCommand implements Callable<Integer> {
         o.put("startWindowTo_s", to);
         o.put("startRule", "mean of each state over the last 10 % of [0, t], at least the last 20 ms");
         ObjectNode st = o.putObject("state_SI");
-        double[] y = op.state();
-        for (StateSlot s : circuit.states()) {
-            st.put(s.name(), y[s.solverIndex()]);
-        }
+        op.stateByName().forEach(st::put);
         return o;
     }
 
@@ -248,13 +244,13 @@ public final class ModesCommand implements Callable<Integer> {
         shares.stream().filter(sh -> sh.share() >= OUTPUT_SHARE).forEach(sh -> target.put(sh.name(), sh.share()));
     }
 
-    private static ObjectNode heldJson(Map<String, TravelLimitedMass.Mode> held) {
+    private static ObjectNode heldJson(Map<String, Member.Mode> held) {
         ObjectNode o = MetricsReport.mapper().createObjectNode();
         held.forEach((id, mode) -> o.put(id, stop(mode)));
         return o;
     }
 
-    private static String held(Map<String, TravelLimitedMass.Mode> held) {
+    private static String held(Map<String, Member.Mode> held) {
         if (held.isEmpty()) {
             return "none";
         }
@@ -262,8 +258,8 @@ public final class ModesCommand implements Callable<Integer> {
                 .collect(Collectors.joining(", "));
     }
 
-    private static String stop(TravelLimitedMass.Mode mode) {
-        return mode == TravelLimitedMass.Mode.AT_LOWER_STOP ? "lower stop" : "upper stop";
+    private static String stop(Member.Mode mode) {
+        return mode == Member.Mode.AT_LOWER_STOP ? "lower stop" : "upper stop";
     }
 
     private static String shares(List<Mode.Share> list, int most, double least, boolean percent) {

@@ -87,7 +87,7 @@ public final class RunCommand implements Callable<Integer> {
         Unit pu = s.units().displayUnit(Dimension.PRESSURE);
         sb.append("node pressures [").append(pu.symbol()).append("]: peak (at s) / final").append(nl);
         for (SignalStatistics.Summary m : SignalStatistics.of(r.trace())) {
-            if (m.dimension() == Dimension.PRESSURE && r.circuit().node(m.name().replace(".p", "")) != null) {
+            if (m.dimension() == Dimension.PRESSURE && r.model().node(m.name().replace(".p", "")) != null) {
                 sb.append(String.format(Locale.ROOT, "  %-24s %10.2f (%.3f) / %10.2f%n", m.name(), pu.fromSi(m.peak()),
                         m.peakTime(), pu.fromSi(m.last())));
             }

@@ -10,7 +10,7 @@ import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.analysis.SignalStatistics;
 import org.branchsim.core.elements.ReducingValve;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.Element;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.model.SignalHandle;
@@ -67,7 +67,7 @@ final class StudyTable {
             }
         }
         for (SignalStatistics.Summary sum : SignalStatistics.of(o.result().trace())) {
-            if (sum.dimension() == Dimension.PRESSURE && isNode(o.result().circuit(), sum.name())) {
+            if (sum.dimension() == Dimension.PRESSURE && isNode(o.result().model(), sum.name())) {
                 List<String> names = nodeColumns(sum.name(), units);
                 m.put(names.get(0), p.fromSi(sum.peak()));
                 m.put(names.get(1), p.fromSi(sum.last()));
@@ -102,7 +102,7 @@ final class StudyTable {
         return List.of(signal + ".peak [" + p + "]", signal + ".final [" + p + "]");
     }
 
-    private static boolean isNode(Circuit circuit, String signal) {
+    private static boolean isNode(CircuitModel circuit, String signal) {
         if (!signal.endsWith(".p")) {
             return false;
         }

@@ -24,9 +24,9 @@ import org.branchsim.core.scenario.FieldBounds;
 import org.branchsim.core.scenario.Located;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.scenario.ScenarioLoader;
-import org.branchsim.core.solve.Method;
+import org.branchsim.core.settings.Method;
 import org.branchsim.core.solve.Simulator;
-import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.study.ParameterPath;
 import org.branchsim.core.study.StudyRunner;
 import org.branchsim.core.study.ValueText;
@@ -151,7 +151,7 @@ public final class TimingCommand implements Callable<Integer> {
             SimulationResult reference = null;
             if (!noReference) {
                 try {
-                    reference = Simulator.run(ScenarioLoader.load(file).circuit(),
+                    reference = Simulator.run(base.circuit(),
                             settings.withMethod(Method.REFERENCE).withRelativeTolerance(1e-10));
                 } catch (BranchsimException e) {
                     w.printf("%s: no reference (Dormand-Prince 8(5,3) at rtol 1e-10 failed: %s)%n", base.name(), e.getMessage());
@@ -160,17 +160,16 @@ public final class TimingCommand implements Callable<Integer> {
             for (Method m : methodList) {
                 SolverSettings s = settings.withMethod(m);
                 for (int i = 0; i < warmup; i++) {
-                    Simulator.run(ScenarioLoader.load(file).circuit(), s);
+                    Simulator.run(base.circuit(), s);
                 }
                 double[] walls = new double[runs];
                 SimulationResult last = null;
                 for (int i = 0; i < runs; i++) {
-                    Scenario sc = ScenarioLoader.load(file);
                     long t0 = System.nanoTime();
-                    last = Simulator.run(sc.circuit(), s);
+                    last = Simulator.run(base.circuit(), s);
                     walls[i] = (System.nanoTime() - t0) * 1e-9;
                 }
-                double heap = peakHeapMegabytes(file, s);
+                double heap = peakHeapMegabytes(base, s);
                 Arrays.sort(walls);
                 double median = walls[walls.length / 2];
                 SolverStatistics st = last.statistics();
@@ -320,8 +319,7 @@ public final class TimingCommand implements Callable<Integer> {
     }
 
     /** Peak heap during one run, MB: pools' peaks reset after a GC, read after the run (includes garbage). */
-    private static double peakHeapMegabytes(Path file, SolverSettings s) {
-        Scenario sc = ScenarioLoader.load(file);
+    private static double peakHeapMegabytes(Scenario sc, SolverSettings s) {
         System.gc();
         List<MemoryPoolMXBean> pools = ManagementFactory.getMemoryPoolMXBeans();
         for (MemoryPoolMXBean p : pools) {

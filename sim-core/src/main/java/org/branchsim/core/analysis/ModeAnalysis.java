@@ -7,11 +7,11 @@ import java.util.List;
 import java.util.Map;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.StateSlot;
+import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.solve.Linearisation;
 import org.branchsim.core.solve.OperatingPoint;
-import org.branchsim.core.solve.OperatingPointSolver;
 import org.hipparchus.complex.Complex;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.exception.MathIllegalStateException;
@@ -45,15 +45,14 @@ public final class ModeAnalysis {
     }
 
     /**
-     * Modes about an operating point. Sets the circuit's member modes to the operating point's held set first.
+     * Modes about an operating point, its members held as it holds them.
      *
-     * @param circuit the circuit the operating point was found for
+     * @param circuit the model the operating point was found for
      * @param point its operating point
      * @return modes, oscillatory ones first by rising damping ratio, then real ones by falling real part
      */
-    public static List<Mode> at(Circuit circuit, OperatingPoint point) {
-        OperatingPointSolver.holdMembers(circuit, point.held());
-        return of(Linearisation.of(circuit, point.time(), point.state()));
+    public static List<Mode> at(CircuitModel circuit, OperatingPoint point) {
+        return of(Linearisation.at(circuit, point));
     }
 
     private static List<Mode> of(Linearisation lin) {
@@ -65,28 +64,26 @@ public final class ModeAnalysis {
     }
 
     /**
-     * Modes about a simulated state, which need not be an equilibrium (indicative only on a limit cycle).
+     * Modes about a simulated state, the end of a run, which need not be an equilibrium (indicative only on a
+     * limit cycle); members held as the run left them.
      *
-     * @param circuit circuit whose members' modes are those at the state (e.g. just after a run to t)
-     * @param t time, s
-     * @param y state, SI
+     * @param run a run ended at the time of interest
      * @return modes, sorted as by {@link #at}
      */
-    public static List<Mode> onTrajectory(Circuit circuit, double t, double[] y) {
-        return of(Linearisation.of(circuit, t, y));
+    public static List<Mode> onTrajectory(SimulationResult run) {
+        return of(Linearisation.atEndOf(run));
     }
 
     /**
      * The smallest damping ratio of the oscillatory modes about an operating point, from the eigenvalues alone
      * (no eigenvectors or participation). Real modes are not included.
      *
-     * @param circuit the circuit the operating point was found for (its member modes are set to the held set)
+     * @param circuit the model the operating point was found for
      * @param point its operating point
      * @return min over oscillatory modes of -sigma / |lambda|; positive infinity when no mode is oscillatory
      */
-    public static double minimumDampingRatio(Circuit circuit, OperatingPoint point) {
-        OperatingPointSolver.holdMembers(circuit, point.held());
-        Linearisation lin = Linearisation.of(circuit, point.time(), point.state());
+    public static double minimumDampingRatio(CircuitModel circuit, OperatingPoint point) {
+        Linearisation lin = Linearisation.at(circuit, point);
         if (lin.size() == 0) {
             return Double.POSITIVE_INFINITY;
         }

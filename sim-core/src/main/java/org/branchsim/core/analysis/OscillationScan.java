@@ -52,7 +52,7 @@ public final class OscillationScan {
     public static List<OscillationFinding> scan(SimulationResult result) {
         Trace trace = result.trace();
         double end = trace.time(trace.size() - 1);
-        return scan(result, ScanWindow.between(result.circuit().inputs(), end));
+        return scan(result, ScanWindow.between(result.model().inputs(), end));
     }
 
     /**

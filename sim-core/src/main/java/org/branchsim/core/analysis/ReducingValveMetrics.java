@@ -82,7 +82,7 @@ public record ReducingValveMetrics(String id, double setting, double peak, doubl
      */
     public static List<ReducingValveMetrics> of(SimulationResult result, double from, double to) {
         List<ReducingValveMetrics> out = new ArrayList<>();
-        for (Element e : result.circuit().elements()) {
+        for (Element e : result.model().elements()) {
             if (e instanceof ReducingValve v) {
                 out.add(of(v, result.trace(), from, to));
             }

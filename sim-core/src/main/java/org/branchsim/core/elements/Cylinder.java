@@ -181,7 +181,7 @@ public final class Cylinder implements Element {
             e.signal(forceSignal, f.hydraulic());
             e.signal(internalLeakSignal, qInternal);
             e.signal(externalLeakSignal, qExternal);
-            if (piston.mode() == TravelLimitedMass.Mode.FREE) {
+            if (piston.free(e)) {
                 e.power(loadWork, loadForce * v);
                 e.power(friction, frictionForce(v) * v);
                 if (contact != null) {
@@ -195,15 +195,5 @@ public final class Cylinder implements Element {
             }
             e.power(leakLoss, (p1 - p2) * qInternal + p2 * qExternal);
         }
-    }
-
-    @Override
-    public List<TravelLimitedMass> members() {
-        return List.of(piston);
-    }
-
-    @Override
-    public void initialiseModes(StateView state) {
-        piston.initialise(state);
     }
 }

@@ -145,14 +145,4 @@ public final class DirectReducingValve implements Element, ReducingValve {
             e.power(meteringLoss, pm);
         }
     }
-
-    @Override
-    public List<TravelLimitedMass> members() {
-        return List.of(spool);
-    }
-
-    @Override
-    public void initialiseModes(StateView state) {
-        spool.initialise(state);
-    }
 }

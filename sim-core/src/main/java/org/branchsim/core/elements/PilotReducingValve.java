@@ -290,15 +290,4 @@ public final class PilotReducingValve implements Element, ReducingValve {
             e.power(chamberStored, pc * chamberInflow);
         }
     }
-
-    @Override
-    public List<TravelLimitedMass> members() {
-        return List.of(spool, poppet);
-    }
-
-    @Override
-    public void initialiseModes(StateView state) {
-        spool.initialise(state);
-        poppet.initialise(state);
-    }
 }

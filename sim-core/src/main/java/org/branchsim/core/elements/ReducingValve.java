@@ -37,7 +37,7 @@ public interface ReducingValve {
     }
 
     /** @return the outlet pressure signal of the circuit's first reducing valve, if it has one */
-    static java.util.Optional<String> firstOutletSignal(org.branchsim.core.model.Circuit circuit) {
+    static java.util.Optional<String> firstOutletSignal(org.branchsim.core.model.CircuitModel circuit) {
         return circuit.elements().stream().filter(e -> e instanceof ReducingValve)
                 .map(e -> ((ReducingValve) e).outletPressureSignal()).findFirst();
     }

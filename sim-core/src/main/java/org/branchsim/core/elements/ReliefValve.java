@@ -96,14 +96,4 @@ public final class ReliefValve implements Element {
             e.power(loss, dp * flow);
         }
     }
-
-    @Override
-    public List<TravelLimitedMass> members() {
-        return List.of(member);
-    }
-
-    @Override
-    public void initialiseModes(StateView state) {
-        member.initialise(state);
-    }
 }

@@ -32,6 +32,14 @@ public interface Binder {
     /** Registers a scheduled input (its name is already absolute). */
     void input(ScheduledInput input);
 
+    /**
+     * Registers a moving member that seats or stops can hold.
+     *
+     * @param member the member (its position and velocity states already declared)
+     * @return the handle of its mode in each run
+     */
+    ModeSlot member(Member member);
+
     /** Registers a discontinuity for the solver to watch. */
     void discontinuity(Discontinuity discontinuity);
 

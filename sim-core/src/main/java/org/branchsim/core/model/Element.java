@@ -4,8 +4,9 @@ import java.util.List;
 
 /**
  * A physical device of the circuit (pump, valve, actuator...). An element declares its states, signals,
- * scheduled inputs, energy accounts and discontinuities when bound, and on each evaluation adds its flows
- * to the nodes it connects and sets the derivatives of its own states. It never sees the state array.
+ * scheduled inputs, energy accounts, moving members and discontinuities when bound, and on each evaluation
+ * adds its flows to the nodes it connects and sets the derivatives of its own states. It never sees the state
+ * array.
  */
 public interface Element {
 
@@ -15,7 +16,10 @@ public interface Element {
     /** @return the nodes this element's ports connect to */
     List<Node> ports();
 
-    /** Declares states, signals, inputs, accounts and discontinuities. Called once, before any evaluation. */
+    /**
+     * Declares states, signals, inputs, accounts, members and discontinuities. Called once, when the model is
+     * built; afterwards the element holds no state of any run, so one element serves many runs at once.
+     */
     void bind(Binder binder);
 
     /**
@@ -23,13 +27,4 @@ public interface Element {
      * evaluation records, its signals and powers.
      */
     void evaluate(Evaluation evaluation);
-
-    /** @return the element's moving members (spools, poppets, pistons) that can be held at a stop */
-    default List<org.branchsim.core.parts.TravelLimitedMass> members() {
-        return List.of();
-    }
-
-    /** Chooses the initial mode of members that start against a seat or stop. Default: nothing to do. */
-    default void initialiseModes(StateView state) {
-    }
 }

@@ -3,12 +3,17 @@ package org.branchsim.core.model;
 import java.util.Arrays;
 
 /**
- * One evaluation of the circuit's equations at a time and state: elements read pressures and states from it
- * and add flows, volumes, derivatives, signals and powers to it. Signals and powers are only stored when
- * the evaluation records (output sampling, energy quadrature), so the solver's many evaluations stay cheap.
+ * One evaluation of the circuit's equations at a time and state of one run: elements read pressures, states and
+ * member modes from it and add flows, volumes, derivatives, signals and powers to it. Signals and powers are
+ * only stored when the evaluation records (output sampling, energy quadrature), so the solver's many
+ * evaluations stay cheap. It is a work buffer of one run: its member modes and impulse ledger are the run's
+ * arrays, handed in by the run's engine ({@link CircuitModel#workspace}).
  */
 public final class Evaluation implements StateEditor {
 
+    private final Node[] nodes;
+    private final Member.Mode[] modes;
+    private final double[] impulses;
     private double t;
     private double[] y;
     private double[] yDot;
@@ -17,16 +22,17 @@ public final class Evaluation implements StateEditor {
     private final double[] nodePressure;
     private double[] signals;
     private double[] powers;
-    private double[] impulses;
 
-    Evaluation(int nodeCount) {
-        nodeInflow = new double[nodeCount];
-        nodeExtraVolume = new double[nodeCount];
-        nodePressure = new double[nodeCount];
+    Evaluation(Node[] nodes, Member.Mode[] modes, double[] impulses) {
+        this.nodes = nodes;
+        this.modes = modes;
+        this.impulses = impulses;
+        nodeInflow = new double[nodes.length];
+        nodeExtraVolume = new double[nodes.length];
+        nodePressure = new double[nodes.length];
     }
 
-    void reset(double time, double[] state, double[] derivative, double[] signalOut, double[] powerOut,
-               Node[] nodes) {
+    void reset(double time, double[] state, double[] derivative, double[] signalOut, double[] powerOut) {
         this.t = time;
         this.y = state;
         this.yDot = derivative;
@@ -45,15 +51,19 @@ public final class Evaluation implements StateEditor {
         }
     }
 
-    void impulses(double[] target) {
-        this.impulses = target;
+    @Override
+    public void impulse(EnergyAccount account, double joules) {
+        impulses[account.index()] += joules;
     }
 
     @Override
-    public void impulse(EnergyAccount account, double joules) {
-        if (impulses != null) {
-            impulses[account.index()] += joules;
-        }
+    public Member.Mode mode(ModeSlot slot) {
+        return modes[slot.index()];
+    }
+
+    @Override
+    public void setMode(ModeSlot slot, Member.Mode mode) {
+        modes[slot.index()] = mode;
     }
 
     @Override

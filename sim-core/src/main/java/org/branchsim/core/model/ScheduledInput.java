@@ -8,7 +8,9 @@ import org.branchsim.core.units.Dimension;
 /**
  * A time-scheduled input of an element (a valve opening, a pump speed, a load force): a piecewise-linear
  * function of time made of ramps from the value at their start to a target. A ramp of zero duration is a
- * step. The solver places an event at every corner so that no step straddles one.
+ * step. The solver places an event at every corner so that no step straddles one. Ramps are added while the
+ * circuit is assembled; building the {@link CircuitModel} fixes them, so every run of the model sees the same
+ * schedule.
  */
 public final class ScheduledInput {
 
@@ -18,10 +20,11 @@ public final class ScheduledInput {
 
     private final String name;
     private final Dimension dimension;
-    private double initial;
+    private final double initial;
     private final List<Ramp> ramps = new ArrayList<>();
     private double[] times = new double[0];
     private double[] values = new double[0];
+    private boolean fixed;
 
     /**
      * @param name input name, {@code <element>.<input>}
@@ -45,11 +48,23 @@ public final class ScheduledInput {
         return dimension;
     }
 
-    /** Adds a ramp; ramps are applied in start-time order and must not overlap (checked by the reader). */
+    /**
+     * Adds a ramp; ramps are applied in start-time order and must not overlap (checked by the reader).
+     *
+     * @throws IllegalStateException once the model holding this input is built (its schedule is fixed then)
+     */
     public void addRamp(Ramp ramp) {
+        if (fixed) {
+            throw new IllegalStateException("the schedule of " + name + " is fixed once its circuit model is built");
+        }
         ramps.add(ramp);
         ramps.sort((a, b) -> Double.compare(a.start(), b.start()));
         rebuild();
+    }
+
+    /** Fixes the schedule (the model is being built). */
+    void fix() {
+        fixed = true;
     }
 
     private void rebuild() {

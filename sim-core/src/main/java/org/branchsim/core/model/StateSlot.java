@@ -23,11 +23,6 @@ public final class StateSlot {
         return index;
     }
 
-    /** @return position of this state in the solver's state vector (for the solver layer only) */
-    public int solverIndex() {
-        return index;
-    }
-
     /** @return the state's name, e.g. {@code clampLine.p} */
     public String name() {
         return name;

@@ -1,7 +1,8 @@
 package org.branchsim.core.model;
 
 /**
- * Read access to the circuit's state at one instant: time, states, node pressures and scheduled inputs.
+ * Read access to one run's state at one instant: time, states, node pressures, scheduled inputs and the modes
+ * of moving members.
  */
 public interface StateView {
 
@@ -13,6 +14,9 @@ public interface StateView {
 
     /** @return the pressure of a node, Pa gauge */
     double pressure(Node node);
+
+    /** @return the mode of a moving member */
+    Member.Mode mode(ModeSlot slot);
 
     /** @return the value of a scheduled input at the current time, SI */
     default double input(ScheduledInput input) {

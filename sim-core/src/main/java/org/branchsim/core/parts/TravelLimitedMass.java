@@ -5,6 +5,8 @@ import org.branchsim.core.model.Binder;
 import org.branchsim.core.model.Discontinuity;
 import org.branchsim.core.model.EnergyAccount;
 import org.branchsim.core.model.Evaluation;
+import org.branchsim.core.model.Member;
+import org.branchsim.core.model.ModeSlot;
 import org.branchsim.core.model.SignalHandle;
 import org.branchsim.core.model.StateEditor;
 import org.branchsim.core.model.StateSlot;
@@ -16,25 +18,10 @@ import org.branchsim.core.units.Dimension;
  * m dv/dt = F, dx/dt = v. Reaching a stop is an event: the member stops dead (plastic impact; its kinetic
  * energy is booked as an impact loss) and is held there until the net force pulls it away, which is a
  * second event. While held its position and velocity do not change. States: {@code <name>.x} (m),
- * {@code <name>.v} (m/s).
+ * {@code <name>.v} (m/s); its mode (free or held, {@link Member.Mode}) is a discrete state of each run, read
+ * and set through the run's state views, so the member itself holds nothing of any run.
  */
-public final class TravelLimitedMass {
-
-    /** Where the member is. */
-    public enum Mode { FREE, AT_LOWER_STOP, AT_UPPER_STOP }
-
-    /**
-     * Net force, N, that must pull a held member off its stop. A force balanced to exactly zero (a piston
-     * with no pressure and no load) keeps it held, and the switching function is never identically zero.
-     */
-    public static final double RELEASE_FORCE = 1e-3;
-
-    /**
-     * Penetration, as a fraction of the travel, a free member may show before reaching a stop counts as an
-     * impact. It keeps round-off and the implicit method's tiny excursions right after a release (a member
-     * leaving its stop with almost no force) from being taken for impacts; the reset puts it back on the stop.
-     */
-    public static final double STOP_TOLERANCE = 1e-6;
+public final class TravelLimitedMass implements Member {
 
     private final String owner;
     private final String name;
@@ -54,7 +41,7 @@ public final class TravelLimitedMass {
     private EnergyAccount flowForce;
     private EnergyAccount impact;
     private NetForce netForce;
-    private Mode mode = Mode.FREE;
+    private ModeSlot modeSlot;
 
     /**
      * @param owner id of the element it belongs to
@@ -97,6 +84,7 @@ public final class TravelLimitedMass {
         damping = binder.account(name + ".damping", EnergyAccount.Kind.LOSS);
         flowForce = binder.account(name + ".flow force", EnergyAccount.Kind.FLOW_FORCE);
         impact = binder.account(name + ".impacts", EnergyAccount.Kind.LOSS);
+        modeSlot = binder.member(this);
         binder.discontinuity(new Stop(true));
         binder.discontinuity(new Stop(false));
     }
@@ -111,12 +99,17 @@ public final class TravelLimitedMass {
         return s.value(v);
     }
 
-    /** @return the lower stop position, m */
+    /** @return true when the member is free (not held at a stop) in the run {@code s} belongs to */
+    public boolean free(StateView s) {
+        return s.mode(modeSlot) == Mode.FREE;
+    }
+
+    @Override
     public double lower() {
         return lower;
     }
 
-    /** @return the upper stop position, m */
+    @Override
     public double upper() {
         return upper;
     }
@@ -126,58 +119,27 @@ public final class TravelLimitedMass {
         return mass;
     }
 
-    /** @return the current mode */
-    public Mode mode() {
-        return mode;
+    @Override
+    public ModeSlot modeSlot() {
+        return modeSlot;
     }
 
-    /** @return the position state (for diagnostics) */
+    @Override
     public StateSlot positionSlot() {
         return x;
     }
 
-    /** @return the velocity state (for diagnostics) */
+    @Override
     public StateSlot velocitySlot() {
         return v;
     }
 
-    /** @return the member's id, {@code <owner>.<name>}, e.g. {@code reducer.spool} (the prefix of its states) */
+    @Override
     public String id() {
         return owner + "." + name;
     }
 
-    /** @return the position of the stop a mode holds the member at, m (NaN for {@link Mode#FREE}) */
-    public double stopPosition(Mode held) {
-        return switch (held) {
-            case AT_LOWER_STOP -> lower;
-            case AT_UPPER_STOP -> upper;
-            case FREE -> Double.NaN;
-        };
-    }
-
-    /**
-     * Sets the mode directly, without an event. For operating-point solves only: the caller must put the
-     * state at the stop ({@link #stopPosition}, velocity zero) when it holds the member. During a run the
-     * mode changes only through the stop events.
-     */
-    public void hold(Mode newMode) {
-        this.mode = newMode;
-    }
-
-    /**
-     * The release rule of the stop events, for operating-point solves: a member held at its lower stop leaves
-     * it when the net force exceeds {@link #RELEASE_FORCE}, one at its upper stop when the net force is below
-     * minus that.
-     *
-     * @param s state
-     * @return true when the member is held and the net force at {@code s} pulls it off its stop
-     */
-    public boolean pulledOffStop(StateView s) {
-        double f = netForce.at(s);
-        return mode == Mode.AT_LOWER_STOP && f > RELEASE_FORCE || mode == Mode.AT_UPPER_STOP && -f > RELEASE_FORCE;
-    }
-
-    /** @return the net force on the member at {@code s}, N, positive towards the upper stop */
+    @Override
     public double netForce(StateView s) {
         return netForce.at(s);
     }
@@ -188,7 +150,7 @@ public final class TravelLimitedMass {
      */
     public void apply(Evaluation e, Forces forces) {
         double vel = e.value(v);
-        if (mode == Mode.FREE) {
+        if (e.mode(modeSlot) == Mode.FREE) {
             double a = forces.net() / mass;
             e.derivative(x, vel);
             e.derivative(v, a);
@@ -204,19 +166,6 @@ public final class TravelLimitedMass {
         }
         e.signal(xSignal, e.value(x));
         e.signal(vSignal, vel);
-    }
-
-    /** Chooses the initial mode: held at a stop when it starts there and the net force presses it on. */
-    public void initialise(StateView s) {
-        double pos = s.value(x);
-        double f = netForce.at(s);
-        if (pos <= lower && f <= RELEASE_FORCE) {
-            mode = Mode.AT_LOWER_STOP;
-        } else if (pos >= upper && f >= -RELEASE_FORCE) {
-            mode = Mode.AT_UPPER_STOP;
-        } else {
-            mode = Mode.FREE;
-        }
     }
 
     /** The event of one stop: reaching it while free, or leaving it while held. */
@@ -246,6 +195,7 @@ public final class TravelLimitedMass {
         public double g(StateView s) {
             Mode held = isLower ? Mode.AT_LOWER_STOP : Mode.AT_UPPER_STOP;
             Mode other = isLower ? Mode.AT_UPPER_STOP : Mode.AT_LOWER_STOP;
+            Mode mode = s.mode(modeSlot);
             if (mode == Mode.FREE) {
                 double slack = STOP_TOLERANCE * (upper - lower);
                 return isLower ? s.value(x) - lower + slack : upper - s.value(x) + slack;
@@ -261,17 +211,18 @@ public final class TravelLimitedMass {
         @Override
         public Response onCrossing(boolean increasing, StateEditor s) {
             Mode held = isLower ? Mode.AT_LOWER_STOP : Mode.AT_UPPER_STOP;
+            Mode mode = s.mode(modeSlot);
             if (mode == Mode.FREE && !increasing) {
                 double vel = s.value(v);
                 s.impulse(impact, 0.5 * mass * vel * vel);
                 s.impulse(kinetic, -0.5 * mass * vel * vel);
                 s.set(x, isLower ? lower : upper);
                 s.set(v, 0.0);
-                mode = held;
+                s.setMode(modeSlot, held);
                 return Response.STATE_CHANGED;
             }
             if (mode == held && increasing) {
-                mode = Mode.FREE;
+                s.setMode(modeSlot, Mode.FREE);
                 return Response.RECOMPUTE;
             }
             return Response.CONTINUE;

@@ -1,8 +1,8 @@
 package org.branchsim.core.scenario;
 
 import java.util.List;
-import org.branchsim.core.model.Circuit;
-import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.model.CircuitModel;
+import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.units.UnitSystem;
 
 /**
@@ -11,7 +11,7 @@ import org.branchsim.core.units.UnitSystem;
  * @param name scenario name (used for the output folder)
  * @param description free text from the file
  * @param file where it was read from
- * @param circuit the circuit, ready to run once
+ * @param circuit the circuit model, immutable: run it any number of times, on any number of threads
  * @param solver solver settings
  * @param units unit system of the outputs
  * @param plots plot groups the scenario asks for, besides the standard ones
@@ -20,7 +20,7 @@ import org.branchsim.core.units.UnitSystem;
  * @param document the parsed document, for building variants (sweeps)
  * @param notes located notes that did not stop the scenario, e.g. old spellings accepted for one more release
  */
-public record Scenario(String name, String description, String file, Circuit circuit, SolverSettings solver,
+public record Scenario(String name, String description, String file, CircuitModel circuit, SolverSettings solver,
                        UnitSystem units, List<PlotGroup> plots, double metricsFrom, double metricsTo,
                        Located document, List<String> notes) {
 

@@ -12,13 +12,13 @@ import java.util.regex.Pattern;
 import org.branchsim.core.fluid.Fluid;
 import org.branchsim.core.fluid.IsoGrade;
 import org.branchsim.core.fluid.ViscosityModel;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.CircuitBuilder;
 import org.branchsim.core.model.Element;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.model.ScheduledInput;
-import org.branchsim.core.solve.Method;
-import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.settings.Method;
+import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.UnitSystem;
 import org.branchsim.core.units.Units;
@@ -73,14 +73,14 @@ public final class ScenarioLoader {
         checkEveryNodeUsed(root, nodes, elements.values(), problems);
 
         Map<String, ScheduledInput> inputs = new LinkedHashMap<>();
-        Circuit circuit = null;
-        if (problems.isEmpty()) {
-            circuit = builder.build();
-            for (ScheduledInput in : circuit.inputs()) {
+        boolean wired = problems.isEmpty();
+        if (wired) {
+            for (ScheduledInput in : builder.inputs()) {
                 inputs.put(in.name(), in);
             }
         }
         readSchedule(root, inputs, problems);
+        CircuitModel circuit = wired ? builder.build() : null;
         SolverSettings solver = readSolver(root.object("solver"), root, problems);
         if (solver != null && circuit != null) {
             checkOutputGrid(root.object("solver"), solver, circuit.signals().size());
@@ -466,7 +466,7 @@ public final class ScenarioLoader {
         return UnitSystem.METRIC;
     }
 
-    private static List<Scenario.PlotGroup> readPlots(Fields out, Circuit circuit) {
+    private static List<Scenario.PlotGroup> readPlots(Fields out, CircuitModel circuit) {
         List<Scenario.PlotGroup> plots = new ArrayList<>();
         List<Located> list = out.list("plots");
         for (int i = 0; i < list.size(); i++) {

@@ -2,22 +2,21 @@ package org.branchsim.core.solve;
 
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
-import org.branchsim.core.model.Circuit;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 
-/** Adapts a {@link Circuit} to Hipparchus: dy/dt = f(t, y), refusing non-finite states. */
+/** Adapts one run of a circuit model to Hipparchus: dy/dt = f(t, y), refusing non-finite states. */
 final class CircuitEquations implements OrdinaryDifferentialEquation {
-    private final Circuit circuit;
+    private final RunEngine engine;
     private final FailureReporter reporter;
 
-    CircuitEquations(Circuit circuit, FailureReporter reporter) {
-        this.circuit = circuit;
+    CircuitEquations(RunEngine engine, FailureReporter reporter) {
+        this.engine = engine;
         this.reporter = reporter;
     }
 
     @Override
     public int getDimension() {
-        return circuit.dimension();
+        return engine.model().dimension();
     }
 
     @Override
@@ -25,11 +24,11 @@ final class CircuitEquations implements OrdinaryDifferentialEquation {
         for (int i = 0; i < y.length; i++) {
             if (!Double.isFinite(y[i])) {
                 throw new BranchsimException(ErrorKey.NAN_IN_STATE, reporter.time(t),
-                        circuit.states().get(i).name(), Double.toString(y[i]), reporter.describeLastGood());
+                        engine.model().states().get(i).name(), Double.toString(y[i]), reporter.describeLastGood());
             }
         }
         double[] yDot = new double[y.length];
-        circuit.derivatives(t, y, yDot);
+        engine.derivatives(t, y, yDot);
         return yDot;
     }
 }

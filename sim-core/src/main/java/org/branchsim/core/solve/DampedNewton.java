@@ -2,10 +2,8 @@ package org.branchsim.core.solve;
 
 import java.util.List;
 import org.branchsim.core.fluid.Fluid;
-import org.branchsim.core.model.Circuit;
-import org.branchsim.core.model.Element;
+import org.branchsim.core.model.Member;
 import org.branchsim.core.model.StateSlot;
-import org.branchsim.core.parts.TravelLimitedMass;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Units;
 import org.hipparchus.linear.Array2DRowRealMatrix;
@@ -56,17 +54,17 @@ final class DampedNewton {
     }
 
     /**
-     * @param circuit circuit with its member modes set to the held set
+     * @param engine engine with its member modes set to the held set
      * @param t time, s
      * @param start start state, SI (held members already at their stops)
      * @param maxIterations bound on the iterations
      * @return the outcome
      */
-    static Outcome solve(Circuit circuit, double t, double[] start, int maxIterations) {
+    static Outcome solve(RunEngine engine, double t, double[] start, int maxIterations) {
         double[] y = start.clone();
-        List<StateSlot> free = Linearisation.freeStates(circuit);
+        List<StateSlot> free = Linearisation.freeStates(engine);
         int n = free.size();
-        double[] r = residual(circuit, t, y, free);
+        double[] r = residual(engine, t, y, free);
         if (r == null) {
             return new Outcome(y, false, 0, "the start state is not finite or has a pressure within "
                     + Fluid.CAVITATION_SCALE + " Pa of absolute zero");
@@ -76,7 +74,7 @@ final class DampedNewton {
         }
         boolean singular = false;
         for (int it = 1; it <= maxIterations; it++) {
-            Linearisation lin = Linearisation.of(circuit, t, y);
+            Linearisation lin = Linearisation.of(engine, t, y);
             Step newton = newtonStep(lin, r);
             if (newton == null) {
                 return new Outcome(y, false, it - 1, "the Newton step is not finite");
@@ -90,8 +88,8 @@ final class DampedNewton {
             double[] trial = null;
             double[] rTrial = null;
             for (int h = 0; h <= MAX_HALVINGS; h++) {
-                trial = step(y, du, a, free);
-                rTrial = residual(circuit, t, trial, free);
+                trial = step(engine, y, du, a, free);
+                rTrial = residual(engine, t, trial, free);
                 if (rTrial != null && (merit(rTrial) <= (1 - 2 * ARMIJO * a) * phi || small)) {
                     break;
                 }
@@ -118,28 +116,26 @@ final class DampedNewton {
      *         pressure is below {@link #VACUUM_FLOOR}, a member lies beyond a stop by more than its travel
      *         (far outside, volumes and forces lose their meaning), or a residual is not finite
      */
-    static double[] residual(Circuit circuit, double t, double[] y, List<StateSlot> free) {
-        for (StateSlot s : circuit.states()) {
-            double v = y[s.solverIndex()];
+    static double[] residual(RunEngine engine, double t, double[] y, List<StateSlot> free) {
+        for (StateSlot s : engine.model().states()) {
+            double v = y[engine.position(s)];
             if (!Double.isFinite(v) || s.dimension() == Dimension.PRESSURE && v < VACUUM_FLOOR) {
                 return null;
             }
         }
-        for (Element e : circuit.elements()) {
-            for (TravelLimitedMass m : e.members()) {
-                double x = y[m.positionSlot().solverIndex()];
-                double travel = m.upper() - m.lower();
-                if (x < m.lower() - travel || x > m.upper() + travel) {
-                    return null;
-                }
+        for (Member m : engine.model().members()) {
+            double x = y[engine.position(m.positionSlot())];
+            double travel = m.upper() - m.lower();
+            if (x < m.lower() - travel || x > m.upper() + travel) {
+                return null;
             }
         }
         double[] f = new double[y.length];
-        circuit.derivatives(t, y, f);
+        engine.derivatives(t, y, f);
         double[] r = new double[free.size()];
         for (int k = 0; k < r.length; k++) {
             StateSlot s = free.get(k);
-            r[k] = f[s.solverIndex()] / s.absoluteScale();
+            r[k] = f[engine.position(s)] / s.absoluteScale();
             if (!Double.isFinite(r[k])) {
                 return null;
             }
@@ -193,11 +189,11 @@ final class DampedNewton {
     private record Step(double[] du, boolean singular) {
     }
 
-    private static double[] step(double[] y, double[] du, double a, List<StateSlot> free) {
+    private static double[] step(RunEngine engine, double[] y, double[] du, double a, List<StateSlot> free) {
         double[] out = y.clone();
         for (int k = 0; k < du.length; k++) {
             StateSlot s = free.get(k);
-            out[s.solverIndex()] += a * du[k] * s.absoluteScale();
+            out[engine.position(s)] += a * du[k] * s.absoluteScale();
         }
         return out;
     }

@@ -1,7 +1,6 @@
 package org.branchsim.core.solve;
 
 import java.util.List;
-import org.branchsim.core.model.Circuit;
 import org.branchsim.core.model.Discontinuity;
 import org.branchsim.core.model.StateEditor;
 import org.branchsim.core.results.EventRecord;
@@ -15,20 +14,20 @@ import org.hipparchus.ode.events.AdaptableInterval;
 import org.hipparchus.ode.events.ODEEventDetector;
 import org.hipparchus.ode.events.ODEEventHandler;
 
-/** Turns one {@link Discontinuity} of the circuit into a Hipparchus event detector and handler. */
+/** Turns one {@link Discontinuity} of a run's model into a Hipparchus event detector and handler. */
 final class DiscontinuityDetector extends AbstractODEDetector<DiscontinuityDetector> {
 
-    private final Circuit circuit;
+    private final RunEngine engine;
     private final SharedView views;
     private final Discontinuity discontinuity;
     private final List<EventRecord> log;
     private final Handler handler = new Handler();
 
-    DiscontinuityDetector(Circuit circuit, SharedView views, Discontinuity discontinuity, List<EventRecord> log,
+    DiscontinuityDetector(RunEngine engine, SharedView views, Discontinuity discontinuity, List<EventRecord> log,
                           AdaptableInterval maxCheck, int maxIter,
                           BracketedUnivariateSolver<UnivariateFunction> solver) {
         super(maxCheck, maxIter, solver, null);
-        this.circuit = circuit;
+        this.engine = engine;
         this.views = views;
         this.discontinuity = discontinuity;
         this.log = log;
@@ -38,7 +37,7 @@ final class DiscontinuityDetector extends AbstractODEDetector<DiscontinuityDetec
     protected DiscontinuityDetector create(AdaptableInterval newMaxCheck, int newMaxIter,
                                            BracketedUnivariateSolver<UnivariateFunction> newSolver,
                                            ODEEventHandler newHandler) {
-        return new DiscontinuityDetector(circuit, views, discontinuity, log, newMaxCheck, newMaxIter, newSolver);
+        return new DiscontinuityDetector(engine, views, discontinuity, log, newMaxCheck, newMaxIter, newSolver);
     }
 
     @Override
@@ -58,7 +57,7 @@ final class DiscontinuityDetector extends AbstractODEDetector<DiscontinuityDetec
         @Override
         public Action eventOccurred(ODEStateAndDerivative state, ODEEventDetector detector, boolean increasing) {
             double[] y = state.getPrimaryState();
-            StateEditor editor = circuit.editor(state.getTime(), y);
+            StateEditor editor = engine.editor(state.getTime(), y);
             Discontinuity.Response r = discontinuity.onCrossing(increasing, editor);
             views.invalidate();
             switch (r) {

@@ -1,6 +1,5 @@
 package org.branchsim.core.solve;
 
-import org.branchsim.core.model.Circuit;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
 
@@ -11,12 +10,12 @@ import org.hipparchus.ode.sampling.ODEStepHandler;
  * same rule, so the balance closes to round-off whatever the rule's own error.
  */
 final class EnergyQuadrature implements ODEStepHandler {
-    private final Circuit circuit;
+    private final RunEngine engine;
     private final double[] energy;
 
-    EnergyQuadrature(Circuit circuit) {
-        this.circuit = circuit;
-        this.energy = new double[circuit.accounts().size()];
+    EnergyQuadrature(RunEngine engine) {
+        this.engine = engine;
+        this.energy = new double[engine.model().accounts().size()];
     }
 
     @Override
@@ -28,7 +27,7 @@ final class EnergyQuadrature implements ODEStepHandler {
             return;
         }
         double mid = 0.5 * (t0 + t1);
-        double[] p = circuit.samplePowers(mid, interpolator.getInterpolatedState(mid).getPrimaryState());
+        double[] p = engine.samplePowers(mid, interpolator.getInterpolatedState(mid).getPrimaryState());
         for (int i = 0; i < p.length; i++) {
             energy[i] += h * p[i];
         }

@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
-import org.branchsim.core.model.Circuit;
 import org.branchsim.core.model.StateSlot;
 
 /**
@@ -12,12 +11,12 @@ import org.branchsim.core.model.StateSlot;
  * were changing fastest (relative to their typical magnitude) when it happened.
  */
 final class FailureReporter {
-    private final Circuit circuit;
+    private final RunEngine engine;
     private double lastTime;
     private double[] lastState;
 
-    FailureReporter(Circuit circuit, double t0, double[] y0) {
-        this.circuit = circuit;
+    FailureReporter(RunEngine engine, double t0, double[] y0) {
+        this.engine = engine;
         this.lastTime = t0;
         this.lastState = y0.clone();
     }
@@ -39,7 +38,7 @@ final class FailureReporter {
     String describeLastGood() {
         double[] yDot = new double[lastState.length];
         try {
-            circuit.derivatives(lastTime, lastState.clone(), yDot);
+            engine.derivatives(lastTime, lastState.clone(), yDot);
         } catch (RuntimeException e) {
             return "unavailable (" + e.getMessage() + ")";
         }
@@ -47,7 +46,7 @@ final class FailureReporter {
         for (int i = 0; i < lastState.length; i++) {
             order.add(i);
         }
-        List<StateSlot> slots = circuit.states();
+        List<StateSlot> slots = engine.model().states();
         order.sort(Comparator.comparingDouble((Integer i) -> -Math.abs(yDot[i]) / slots.get(i).absoluteScale()));
         StringBuilder sb = new StringBuilder("at t = " + time(lastTime) + " s, fastest-changing: ");
         for (int k = 0; k < Math.min(5, order.size()); k++) {

@@ -1,6 +1,5 @@
 package org.branchsim.core.solve;
 
-import org.branchsim.core.model.Circuit;
 import org.branchsim.core.results.Trace;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
@@ -11,7 +10,7 @@ import org.hipparchus.ode.sampling.ODEStepHandler;
  * the steps taken. Also counts accepted steps and remembers the last accepted state for failure reports.
  */
 final class GridSampler implements ODEStepHandler {
-    private final Circuit circuit;
+    private final RunEngine engine;
     private final Trace trace;
     private final double interval;
     private final double endTime;
@@ -19,8 +18,8 @@ final class GridSampler implements ODEStepHandler {
     private long nextIndex;
     private long steps;
 
-    GridSampler(Circuit circuit, Trace trace, double interval, double endTime, FailureReporter reporter) {
-        this.circuit = circuit;
+    GridSampler(RunEngine engine, Trace trace, double interval, double endTime, FailureReporter reporter) {
+        this.engine = engine;
         this.trace = trace;
         this.interval = interval;
         this.endTime = endTime;
@@ -45,7 +44,7 @@ final class GridSampler implements ODEStepHandler {
                 break;
             }
             ODEStateAndDerivative s = interpolator.getInterpolatedState(tk);
-            trace.add(tk, circuit.sampleSignals(tk, s.getPrimaryState()));
+            trace.add(tk, engine.sampleSignals(tk, s.getPrimaryState()));
             nextIndex++;
         }
         ODEStateAndDerivative end = interpolator.getCurrentState();

@@ -1,6 +1,8 @@
 package org.branchsim.core.solve;
 
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
+import org.branchsim.core.settings.Method;
+import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.solve.stiff.RosenbrockIntegrator;
 import org.branchsim.core.solve.stiff.SparsityPattern;
 import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
@@ -15,7 +17,7 @@ final class IntegratorFactory {
     /** Steps a Jacobian may serve before it is estimated again. */
     static final int JACOBIAN_MAX_AGE = 1;
 
-    static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol, Circuit circuit) {
+    static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol, CircuitModel circuit) {
         switch (s.method()) {
             case IMPLICIT:
                 RosenbrockIntegrator r = new RosenbrockIntegrator(s.minStep(), s.maxStep(), absTol, relTol,
@@ -53,7 +55,7 @@ final class IntegratorFactory {
     }
 
     /** @return the name of the state with the largest error in the last step tried, when the method knows it */
-    static String worstState(AdaptiveStepsizeIntegrator integrator, Circuit circuit) {
+    static String worstState(AdaptiveStepsizeIntegrator integrator, CircuitModel circuit) {
         if (integrator instanceof RosenbrockIntegrator r && r.worstComponent() >= 0
                 && r.worstComponent() < circuit.dimension()) {
             return circuit.states().get(r.worstComponent()).name();

@@ -3,19 +3,21 @@ package org.branchsim.core.solve;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
-import org.branchsim.core.model.Circuit;
-import org.branchsim.core.model.Element;
+import org.branchsim.core.model.CircuitModel;
+import org.branchsim.core.model.Member;
 import org.branchsim.core.model.StateSlot;
-import org.branchsim.core.parts.TravelLimitedMass;
+import org.branchsim.core.results.SimulationResult;
+import org.branchsim.core.solve.stiff.DifferenceJacobian;
 
 /**
  * The Jacobian A = df/dy of a circuit's equations dy/dt = f(t, y) over its <em>free</em> states, at one time
  * and state: members held at a seat or stop are left out (their position and velocity are fixed while held).
- * Columns are taken by central differences, step {@link #RELATIVE_STEP} times the larger of |y_j| and the
- * state's typical magnitude s_j ({@link StateSlot#absoluteScale()}). The matrix is stored scaled,
+ * Columns are taken by central differences ({@link DifferenceJacobian}, the integrator's Jacobian code), step
+ * {@link #RELATIVE_STEP} times the larger of |y_j| and the state's typical magnitude s_j
+ * ({@link StateSlot#absoluteScale()}). The matrix is stored scaled,
  * A_s[r][c] = d(y_r / s_r) / d(y_c / s_c) = A[r][c] s_c / s_r, in 1/s: its eigenvalues are those of A, and
  * pressures in Pa next to positions in m no longer make it badly conditioned. Shared by the mode analysis
- * and the operating-point Newton solve. Uses the circuit's current member modes.
+ * and the operating-point Newton solve.
  */
 public final class Linearisation {
 
@@ -45,55 +47,82 @@ public final class Linearisation {
     }
 
     /**
-     * @param circuit circuit whose member modes say which members are held
+     * Linearises about an operating point, its members held as it holds them.
+     *
+     * @param model the model the operating point was found for
+     * @param point the operating point
+     * @return the scaled Jacobian over the free states
+     */
+    public static Linearisation at(CircuitModel model, OperatingPoint point) {
+        RunEngine engine = new RunEngine(model);
+        engine.hold(point.held());
+        return of(engine, point.time(), point.state());
+    }
+
+    /**
+     * Linearises about the end of a run (which need not be an equilibrium), its members held as the run left
+     * them.
+     *
+     * @param run a finished run
+     * @return the scaled Jacobian over the free states at the run's end time and final state
+     */
+    public static Linearisation atEndOf(SimulationResult run) {
+        RunEngine engine = new RunEngine(run.model());
+        engine.hold(run.description().finalModes());
+        return of(engine, run.description().settings().endTime(), run.finalState());
+    }
+
+    /**
+     * @param engine the run whose member modes say which members are held
      * @param t time, s (scheduled inputs are evaluated at t)
      * @param y state, SI (not changed)
      * @return the scaled Jacobian over the free states
      */
-    public static Linearisation of(Circuit circuit, double t, double[] y) {
-        List<StateSlot> free = freeStates(circuit);
+    static Linearisation of(RunEngine engine, double t, double[] y) {
+        List<StateSlot> free = freeStates(engine);
         int n = free.size();
         double[] scale = new double[n];
+        int[] columns = new int[n];
+        int[] rowOf = new int[y.length];
         for (int k = 0; k < n; k++) {
             scale[k] = free.get(k).absoluteScale();
+            columns[k] = engine.position(free.get(k));
+            rowOf[columns[k]] = k;
+        }
+        double[] typical = new double[y.length];
+        for (StateSlot s : engine.model().states()) {
+            typical[engine.position(s)] = s.absoluteScale();
         }
         double[][] a = new double[n][n];
-        double[] yp = y.clone();
-        double[] fPlus = new double[y.length];
-        double[] fMinus = new double[y.length];
-        for (int c = 0; c < n; c++) {
-            int j = free.get(c).solverIndex();
-            double h = RELATIVE_STEP * Math.max(Math.abs(y[j]), scale[c]);
-            yp[j] = y[j] + h;
-            circuit.derivatives(t, yp, fPlus);
-            yp[j] = y[j] - h;
-            circuit.derivatives(t, yp, fMinus);
-            yp[j] = y[j];
+        DifferenceJacobian differences = new DifferenceJacobian(DifferenceJacobian.Scheme.CENTRAL, RELATIVE_STEP,
+                typical, DifferenceJacobian.singleColumns(columns));
+        differences.estimate(yy -> {
+            double[] f = new double[yy.length];
+            engine.derivatives(t, yy, f);
+            return f;
+        }, y, null, (j, quotient) -> {
+            int c = rowOf[j];
             for (int r = 0; r < n; r++) {
-                int i = free.get(r).solverIndex();
-                a[r][c] = (fPlus[i] - fMinus[i]) / (2 * h) * scale[c] / scale[r];
+                a[r][c] = quotient.applyAsDouble(columns[r]) * scale[c] / scale[r];
             }
-        }
+        });
         return new Linearisation(t, Collections.unmodifiableList(free), scale, a);
     }
 
-    /**
-     * @param circuit a circuit
-     * @return its states in solver order, without the position and velocity of members held at a stop
-     */
-    public static List<StateSlot> freeStates(Circuit circuit) {
-        boolean[] held = new boolean[circuit.dimension()];
-        for (Element e : circuit.elements()) {
-            for (TravelLimitedMass member : e.members()) {
-                if (member.mode() != TravelLimitedMass.Mode.FREE) {
-                    held[member.positionSlot().solverIndex()] = true;
-                    held[member.velocitySlot().solverIndex()] = true;
-                }
+    /** @return the model's states in state-vector order, without the position and velocity of held members */
+    static List<StateSlot> freeStates(RunEngine engine) {
+        CircuitModel model = engine.model();
+        boolean[] held = new boolean[model.dimension()];
+        List<Member> members = model.members();
+        for (int k = 0; k < members.size(); k++) {
+            if (engine.mode(k) != Member.Mode.FREE) {
+                held[engine.position(members.get(k).positionSlot())] = true;
+                held[engine.position(members.get(k).velocitySlot())] = true;
             }
         }
         List<StateSlot> free = new ArrayList<>();
-        for (StateSlot s : circuit.states()) {
-            if (!held[s.solverIndex()]) {
+        for (StateSlot s : model.states()) {
+            if (!held[engine.position(s)]) {
                 free.add(s);
             }
         }

@@ -9,10 +9,8 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.branchsim.core.error.ErrorKey;
-import org.branchsim.core.model.Circuit;
-import org.branchsim.core.model.Element;
+import org.branchsim.core.model.Member;
 import org.branchsim.core.model.StateSlot;
-import org.branchsim.core.parts.TravelLimitedMass;
 import org.branchsim.core.units.Dimension;
 
 /**
@@ -27,45 +25,44 @@ final class NoOperatingPointReport {
     }
 
     /**
-     * @param circuit the circuit, its member modes at the last held set
+     * @param engine the solve's engine, its member modes at the last held set
      * @param t time, s
      * @param reason why the solve stopped, with its counts
      * @param start the start
      * @param y the last iterate, SI
      * @return the message arguments
      */
-    static Object[] arguments(Circuit circuit, double t, String reason, OperatingPointStart start, double[] y) {
-        Map<String, TravelLimitedMass.Mode> lastHeld = OperatingPointSolver.heldMembers(circuit);
-        List<StateSlot> free = Linearisation.freeStates(circuit);
+    static Object[] arguments(RunEngine engine, double t, String reason, OperatingPointStart start, double[] y) {
+        Map<String, Member.Mode> lastHeld = engine.heldMembers();
+        List<StateSlot> free = Linearisation.freeStates(engine);
         double[] f = new double[y.length];
-        circuit.derivatives(t, y, f);
-        List<StateSlot> top = fastest(f, free);
+        engine.derivatives(t, y, f);
+        List<StateSlot> top = fastest(engine, f, free);
         List<String> moving = new ArrayList<>();
         start.moving().forEach((id, speed) -> moving.add(String.format(Locale.ROOT, "%s is still moving at %.4g m/s",
                 id, speed)));
         Set<Integer> memberVelocities = new HashSet<>();
-        for (Element e : circuit.elements()) {
-            for (TravelLimitedMass m : e.members()) {
-                memberVelocities.add(m.velocitySlot().solverIndex());
-            }
+        for (Member m : engine.model().members()) {
+            memberVelocities.add(engine.position(m.velocitySlot()));
         }
         for (StateSlot s : top) {
-            double speed = y[s.solverIndex()];
+            double speed = y[engine.position(s)];
             if ((s.dimension() == Dimension.VELOCITY || s.dimension() == Dimension.ROTATIONAL_SPEED)
-                    && !memberVelocities.contains(s.solverIndex())
+                    && !memberVelocities.contains(engine.position(s))
                     && Math.abs(speed) > OperatingPointSolver.MOVING_FRACTION * s.absoluteScale()) {
                 moving.add(String.format(Locale.ROOT, "%s is still moving at %.4g %s", part(s.name()), speed,
                         s.dimension().siSymbol()));
             }
         }
-        String changing = "at the last Newton iterate: " + describe(y, f, top);
+        String changing = "at the last Newton iterate: " + describe(engine, y, f, top);
         if (!start.moving().isEmpty()) {
-            OperatingPointSolver.holdMembers(circuit, start.held());
+            engine.hold(start.held());
             double[] y0 = start.state();
             double[] f0 = new double[y0.length];
-            circuit.derivatives(t, y0.clone(), f0);
-            changing = "in the start state: " + describe(y0, f0, fastest(f0, Linearisation.freeStates(circuit)));
-            OperatingPointSolver.holdMembers(circuit, lastHeld);
+            engine.derivatives(t, y0.clone(), f0);
+            changing = "in the start state: " + describe(engine, y0, f0,
+                    fastest(engine, f0, Linearisation.freeStates(engine)));
+            engine.hold(lastHeld);
         }
         String suffix = moving.isEmpty()
                 ? "; linearise on the trajectory (--on-trajectory) to see modes about the simulated state"
@@ -79,18 +76,18 @@ final class NoOperatingPointReport {
         return new MessageFormat(ErrorKey.NO_OPERATING_POINT.pattern(), Locale.ROOT).format(arguments);
     }
 
-    private static List<StateSlot> fastest(double[] f, List<StateSlot> free) {
+    private static List<StateSlot> fastest(RunEngine engine, double[] f, List<StateSlot> free) {
         List<StateSlot> order = new ArrayList<>(free);
-        order.sort(Comparator.comparingDouble((StateSlot s) -> -Math.abs(f[s.solverIndex()]) / s.absoluteScale()));
+        order.sort(Comparator.comparingDouble((StateSlot s) -> -Math.abs(f[engine.position(s)]) / s.absoluteScale()));
         return order.subList(0, Math.min(OperatingPointSolver.REPORTED_STATES, order.size()));
     }
 
-    private static String describe(double[] y, double[] f, List<StateSlot> states) {
+    private static String describe(RunEngine engine, double[] y, double[] f, List<StateSlot> states) {
         List<String> parts = new ArrayList<>();
         for (StateSlot s : states) {
             String unit = s.dimension().siSymbol();
-            parts.add(String.format(Locale.ROOT, "%s = %.6g %s (rate %.4g %s/s)", s.name(), y[s.solverIndex()], unit,
-                    f[s.solverIndex()], unit));
+            int i = engine.position(s);
+            parts.add(String.format(Locale.ROOT, "%s = %.6g %s (rate %.4g %s/s)", s.name(), y[i], unit, f[i], unit));
         }
         return parts.isEmpty() ? "none (no free states)" : String.join("; ", parts);
     }

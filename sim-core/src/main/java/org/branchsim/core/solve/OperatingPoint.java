@@ -1,9 +1,11 @@
 package org.branchsim.core.solve;
 
 import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import org.branchsim.core.parts.TravelLimitedMass;
+import org.branchsim.core.model.Member;
 
 /**
  * An operating point of a circuit: a state y with f(t, y) = 0 over the free states at a fixed time t
@@ -11,7 +13,9 @@ import org.branchsim.core.parts.TravelLimitedMass;
  * {@link OperatingPointSolver}.
  *
  * @param time time, s
- * @param state the state vector, SI, in solver order (held members at their stop with zero velocity)
+ * @param state the state vector, SI, in the order of the model's states (held members at their stop with zero
+ *        velocity)
+ * @param stateNames the names of the states, in the same order
  * @param held members held at a stop: member id ({@code <element>.<member>}) to the stop holding it, sorted
  *        by id
  * @param iterations Newton iterations taken, over all active sets
@@ -23,14 +27,28 @@ import org.branchsim.core.parts.TravelLimitedMass;
  * @param converged true when the convergence rule of {@link OperatingPointSolver} holds
  * @param failure why the solve failed (empty when it converged)
  */
-public record OperatingPoint(double time, double[] state, Map<String, TravelLimitedMass.Mode> held, int iterations,
-                             int switches, double residual, String worstState, double worstRate, boolean converged,
-                             String failure) {
+public record OperatingPoint(double time, double[] state, List<String> stateNames, Map<String, Member.Mode> held,
+                             int iterations, int switches, double residual, String worstState, double worstRate,
+                             boolean converged, String failure) {
 
-    /** Copies the state and the held set. */
+    /** Copies the state, the names and the held set. */
     public OperatingPoint {
         state = state.clone();
+        stateNames = List.copyOf(stateNames);
         held = Collections.unmodifiableMap(new TreeMap<>(held));
+        if (stateNames.size() != state.length) {
+            throw new IllegalArgumentException("an operating point needs a name per state: " + stateNames.size()
+                    + " names for " + state.length + " states");
+        }
+    }
+
+    /** @return every state's value by name, SI, in the order of the model's states */
+    public Map<String, Double> stateByName() {
+        Map<String, Double> out = new LinkedHashMap<>();
+        for (int i = 0; i < state.length; i++) {
+            out.put(stateNames.get(i), state[i]);
+        }
+        return Collections.unmodifiableMap(out);
     }
 
     /** @return a copy of the state vector, SI */

@@ -2,7 +2,6 @@ package org.branchsim.core.solve;
 
 import java.util.ArrayList;
 import java.util.HashSet;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -11,19 +10,17 @@ import java.util.TreeMap;
 import java.util.TreeSet;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
-import org.branchsim.core.model.Circuit;
-import org.branchsim.core.model.Element;
+import org.branchsim.core.model.CircuitModel;
+import org.branchsim.core.model.Member;
+import org.branchsim.core.model.Member.Mode;
 import org.branchsim.core.model.StateSlot;
 import org.branchsim.core.model.StateView;
-import org.branchsim.core.parts.TravelLimitedMass;
-import org.branchsim.core.parts.TravelLimitedMass.Mode;
 import org.branchsim.core.results.SimulationResult;
 
 /**
- * Finds an operating point of a circuit at a fixed time t: a state y with f(t, y) = 0 over the free states,
- * scheduled inputs frozen at their values at t, members held at a seat or stop kept there. No time is
- * simulated, so a freshly built circuit (a variant of the same topology, say) can be solved from another
- * circuit's operating point.
+ * Finds an operating point of a circuit model at a fixed time t: a state y with f(t, y) = 0 over the free
+ * states, scheduled inputs frozen at their values at t, members held at a seat or stop kept there. No time is
+ * simulated, so a variant's model (the same topology) can be solved from another model's operating point.
  * <p>
  * <b>Newton solve.</b> A damped Newton method over the free states in scaled unknowns y_j / s_j (s_j the
  * state's typical magnitude), LU of the scaled finite-difference {@link Linearisation} (a minimum-norm
@@ -35,8 +32,8 @@ import org.branchsim.core.results.SimulationResult;
  * the scaled Jacobian (a residual that small next to the circuit's fastest rates is round-off).
  * <p>
  * <b>Active set.</b> After a converged Newton solve, a free member whose position lies beyond a stop (by more
- * than {@link TravelLimitedMass#STOP_TOLERANCE} of its travel) is held at that stop, and a held member whose
- * net force pulls it off its stop (the release rule of the stop events, {@link TravelLimitedMass#pulledOffStop})
+ * than {@link Member#STOP_TOLERANCE} of its travel) is held at that stop, and a held member whose
+ * net force pulls it off its stop (the release rule of the stop events, {@link Member#pulledOffStop})
  * is released. After a failed solve the iterate's positions mean little, so the members are judged at the
  * state the solve started from: held members are released by the same rule, and a free member still pushed
  * by a net force is held at the stop the force points to (no equilibrium within its travel; its position
@@ -45,9 +42,8 @@ import org.branchsim.core.results.SimulationResult;
  * transit at the start ({@link OperatingPointStart#moving()}) is never brought to rest at a stop: the solve
  * fails instead.
  * <p>
- * <b>Side effect.</b> The solve sets the modes of the circuit's members and leaves them at the operating
- * point's held set (when it fails, at the last held set tried), so that a mode analysis right after linearises
- * with the same members held. Nothing is restored.
+ * The solve holds its members' modes in an engine of its own: the model is only read, and the held set found is
+ * part of the {@link OperatingPoint}, which a mode analysis linearises with.
  */
 public final class OperatingPointSolver {
 
@@ -83,48 +79,14 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * @param circuit a circuit
-     * @return its members held at a stop now: member id to its stop, sorted by id
-     */
-    public static Map<String, Mode> heldMembers(Circuit circuit) {
-        Map<String, Mode> held = new TreeMap<>();
-        for (TravelLimitedMass m : members(circuit).values()) {
-            if (m.mode() != Mode.FREE) {
-                held.put(m.id(), m.mode());
-            }
-        }
-        return held;
-    }
-
-    /**
-     * Sets every member's mode: held at the given stop when named, free otherwise (the state is not touched).
-     *
-     * @param circuit a circuit
-     * @param held member id to its stop
-     * @throws BranchsimException BAD_ARGUMENT when an id names no member of the circuit
-     */
-    public static void holdMembers(Circuit circuit, Map<String, Mode> held) {
-        Map<String, TravelLimitedMass> members = members(circuit);
-        for (String id : held.keySet()) {
-            if (!members.containsKey(id)) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "no member \"" + id + "\" in circuit "
-                        + circuit.name() + "; members: " + String.join(", ", members.keySet()));
-            }
-        }
-        for (TravelLimitedMass m : members.values()) {
-            m.hold(held.getOrDefault(m.id(), Mode.FREE));
-        }
-    }
-
-    /**
-     * @param circuit the circuit (its member modes are left at the operating point's held set)
+     * @param circuit the model (not changed)
      * @param t time, s
      * @param start start state, held set and members in transit
      * @return the converged operating point
      * @throws BranchsimException NO_OPERATING_POINT when none is found, naming the time, the states changing
      *         most and anything still moving
      */
-    public static OperatingPoint solve(Circuit circuit, double t, OperatingPointStart start) {
+    public static OperatingPoint solve(CircuitModel circuit, double t, OperatingPointStart start) {
         Attempt a = run(circuit, t, start);
         if (!a.point().converged()) {
             throw new BranchsimException(ErrorKey.NO_OPERATING_POINT, a.arguments());
@@ -133,18 +95,18 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Solves a circuit from a given state, e.g. a freshly built variant from another circuit's operating point
+     * Solves a model from a given state, e.g. a variant's model from another model's operating point
      * ({@code solve(variant, op.time(), op.state(), op.held())}); members moving in the start state count as in
      * transit ({@link OperatingPointStart#fromState}).
      *
-     * @param circuit the circuit (its member modes are left at the operating point's held set)
+     * @param circuit the model (not changed)
      * @param t time, s
-     * @param start start state, SI, in the circuit's solver order
+     * @param start start state, SI, in the order of the model's states
      * @param held members held at the start: member id to its stop
      * @return the converged operating point
      * @throws BranchsimException NO_OPERATING_POINT when none is found
      */
-    public static OperatingPoint solve(Circuit circuit, double t, double[] start, Map<String, Mode> held) {
+    public static OperatingPoint solve(CircuitModel circuit, double t, double[] start, Map<String, Mode> held) {
         return solve(circuit, t, OperatingPointStart.fromState(circuit, start, held));
     }
 
@@ -152,21 +114,22 @@ public final class OperatingPointSolver {
      * As {@link #solve(Circuit, double, OperatingPointStart)}, but returns the last iterate, unconverged,
      * instead of throwing; {@link OperatingPoint#failure()} then holds the message the exception would carry.
      */
-    public static OperatingPoint attempt(Circuit circuit, double t, OperatingPointStart start) {
+    public static OperatingPoint attempt(CircuitModel circuit, double t, OperatingPointStart start) {
         return run(circuit, t, start).point();
     }
 
     private record Attempt(OperatingPoint point, Object[] arguments) {
     }
 
-    private static Attempt run(Circuit circuit, double t, OperatingPointStart start) {
+    private static Attempt run(CircuitModel circuit, double t, OperatingPointStart start) {
         double[] y = start.state();
         if (y.length != circuit.dimension() || !Double.isFinite(t)) {
             throw new BranchsimException(ErrorKey.BAD_ARGUMENT, String.format(Locale.ROOT,
                     "an operating-point start needs %d states and a finite time, found %d states at t = %s",
                     circuit.dimension(), y.length, t));
         }
-        Map<String, TravelLimitedMass> members = members(circuit);
+        RunEngine engine = new RunEngine(circuit);
+        List<Member> members = circuit.members();
         Map<String, Mode> held = new TreeMap<>(start.held());
         Set<Map<String, Mode>> tried = new HashSet<>();
         int iterations = 0;
@@ -174,19 +137,21 @@ public final class OperatingPointSolver {
         String reason;
         while (true) {
             tried.add(held);
-            holdMembers(circuit, held);
-            for (Map.Entry<String, Mode> e : held.entrySet()) {
-                TravelLimitedMass m = members.get(e.getKey());
-                y[m.positionSlot().solverIndex()] = m.stopPosition(e.getValue());
-                y[m.velocitySlot().solverIndex()] = 0.0;
+            engine.hold(held);
+            for (Member m : members) {
+                Mode stop = held.get(m.id());
+                if (stop != null) {
+                    y[engine.position(m.positionSlot())] = m.stopPosition(stop);
+                    y[engine.position(m.velocitySlot())] = 0.0;
+                }
             }
             double[] solveStart = y.clone();
-            DampedNewton.Outcome out = DampedNewton.solve(circuit, t, y, MAX_ITERATIONS);
+            DampedNewton.Outcome out = DampedNewton.solve(engine, t, y, MAX_ITERATIONS);
             iterations += out.iterations();
             y = out.state();
             Map<String, Mode> next = new TreeMap<>(held);
-            String transit = out.converged() ? settle(members, start, circuit.view(t, y), y, next)
-                    : push(members, start, circuit.view(t, solveStart), next);
+            String transit = out.converged() ? settle(engine, start, engine.view(t, y), y, next)
+                    : push(engine, start, engine.view(t, solveStart), next);
             if (transit != null) {
                 reason = transit;
                 break;
@@ -209,14 +174,14 @@ public final class OperatingPointSolver {
                 y = solveStart;
             }
         }
-        holdMembers(circuit, held);
-        List<StateSlot> free = Linearisation.freeStates(circuit);
+        engine.hold(held);
+        List<StateSlot> free = Linearisation.freeStates(engine);
         double[] f = new double[y.length];
-        circuit.derivatives(t, y, f);
+        engine.derivatives(t, y, f);
         StateSlot worst = null;
         double residual = 0.0;
         for (StateSlot s : free) {
-            double r = Math.abs(f[s.solverIndex()]) / s.absoluteScale();
+            double r = Math.abs(f[engine.position(s)]) / s.absoluteScale();
             if (worst == null || r > residual) {
                 residual = r;
                 worst = s;
@@ -226,12 +191,13 @@ public final class OperatingPointSolver {
         Object[] args = null;
         String failure = "";
         if (!converged) {
-            args = NoOperatingPointReport.arguments(circuit, t, reason + " (" + iterations + " Newton iterations, "
+            args = NoOperatingPointReport.arguments(engine, t, reason + " (" + iterations + " Newton iterations, "
                     + switches + " held-set changes)", start, y);
             failure = NoOperatingPointReport.message(args);
         }
-        OperatingPoint op = new OperatingPoint(t, y, held, iterations, switches, residual,
-                worst == null ? "" : worst.name(), worst == null ? 0.0 : f[worst.solverIndex()], converged, failure);
+        List<String> names = circuit.states().stream().map(StateSlot::name).toList();
+        OperatingPoint op = new OperatingPoint(t, y, names, held, iterations, switches, residual,
+                worst == null ? "" : worst.name(), worst == null ? 0.0 : f[engine.position(worst)], converged, failure);
         return new Attempt(op, args);
     }
 
@@ -241,16 +207,16 @@ public final class OperatingPointSolver {
      *
      * @return why the solve must stop (a member in transit beyond a stop), or null
      */
-    private static String settle(Map<String, TravelLimitedMass> members, OperatingPointStart start, StateView view,
-                                 double[] y, Map<String, Mode> next) {
-        for (TravelLimitedMass m : members.values()) {
-            if (m.mode() != Mode.FREE) {
+    private static String settle(RunEngine engine, OperatingPointStart start, StateView view, double[] y,
+                                 Map<String, Mode> next) {
+        for (Member m : engine.model().members()) {
+            if (view.mode(m.modeSlot()) != Mode.FREE) {
                 if (m.pulledOffStop(view)) {
                     next.remove(m.id());
                 }
                 continue;
             }
-            Mode stop = beyond(m, y[m.positionSlot().solverIndex()]);
+            Mode stop = beyond(m, y[engine.position(m.positionSlot())]);
             if (stop != Mode.FREE && start.moving().containsKey(m.id())) {
                 return String.format(Locale.ROOT, "the equilibrium found has %s, in transit at %.4g m/s at the start, "
                         + "beyond its %s (an equilibrium there is where a motion ends, not the state at this time)",
@@ -266,22 +232,21 @@ public final class OperatingPointSolver {
     /**
      * After a failed solve, where the iterate's positions mean little: judged at the state the solve started
      * from, a held member whose net force pulls it off its stop is released, and a free member (not in
-     * transit) on which a net force beyond {@link TravelLimitedMass#RELEASE_FORCE} acts is held at the stop the
+     * transit) on which a net force beyond {@link Member#RELEASE_FORCE} acts is held at the stop the
      * force pushes it to: it has no equilibrium within its travel (its position barely enters the equations,
      * so Newton cannot carry it to the stop).
      *
      * @return null (a failed solve is never the transit case: that needs an equilibrium beyond a stop)
      */
-    private static String push(Map<String, TravelLimitedMass> members, OperatingPointStart start, StateView view,
-                               Map<String, Mode> next) {
-        for (TravelLimitedMass m : members.values()) {
-            if (m.mode() != Mode.FREE) {
+    private static String push(RunEngine engine, OperatingPointStart start, StateView view, Map<String, Mode> next) {
+        for (Member m : engine.model().members()) {
+            if (view.mode(m.modeSlot()) != Mode.FREE) {
                 if (m.pulledOffStop(view)) {
                     next.remove(m.id());
                 }
             } else if (!start.moving().containsKey(m.id())) {
                 double force = m.netForce(view);
-                if (Math.abs(force) > TravelLimitedMass.RELEASE_FORCE) {
+                if (Math.abs(force) > Member.RELEASE_FORCE) {
                     next.put(m.id(), force > 0 ? Mode.AT_UPPER_STOP : Mode.AT_LOWER_STOP);
                 }
             }
@@ -290,8 +255,8 @@ public final class OperatingPointSolver {
     }
 
     /** @return the stop a free member's position lies beyond (by more than the stop tolerance), or FREE */
-    private static Mode beyond(TravelLimitedMass m, double x) {
-        double slack = TravelLimitedMass.STOP_TOLERANCE * (m.upper() - m.lower());
+    private static Mode beyond(Member m, double x) {
+        double slack = Member.STOP_TOLERANCE * (m.upper() - m.lower());
         if (x < m.lower() - slack) {
             return Mode.AT_LOWER_STOP;
         }
@@ -318,15 +283,5 @@ public final class OperatingPointSolver {
             case AT_LOWER_STOP -> "held at its lower stop";
             case AT_UPPER_STOP -> "held at its upper stop";
         };
-    }
-
-    private static Map<String, TravelLimitedMass> members(Circuit circuit) {
-        Map<String, TravelLimitedMass> out = new LinkedHashMap<>();
-        for (Element e : circuit.elements()) {
-            for (TravelLimitedMass m : e.members()) {
-                out.put(m.id(), m);
-            }
-        }
-        return out;
     }
 }

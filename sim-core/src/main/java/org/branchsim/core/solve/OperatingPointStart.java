@@ -8,11 +8,10 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
-import org.branchsim.core.model.Circuit;
-import org.branchsim.core.model.Element;
+import org.branchsim.core.model.CircuitModel;
+import org.branchsim.core.model.Member;
+import org.branchsim.core.model.Member.Mode;
 import org.branchsim.core.model.StateSlot;
-import org.branchsim.core.parts.TravelLimitedMass;
-import org.branchsim.core.parts.TravelLimitedMass.Mode;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.Trace;
 
@@ -21,7 +20,7 @@ import org.branchsim.core.results.Trace;
  * transit (moving in one direction, like a cylinder mid-stroke), which the solve will not bring to
  * rest at a stop: an equilibrium there is where their motion ends, not the circuit's state at this time.
  *
- * @param state start state vector, SI, in solver order
+ * @param state start state vector, SI, in the order of the model's states
  * @param held members held at a stop at the start: member id ({@code <element>.<member>}) to its stop
  * @param moving members in transit: member id to its mean speed, m/s
  */
@@ -51,8 +50,8 @@ public record OperatingPointStart(double[] state, Map<String, Mode> held, Map<St
     /**
      * A start from a run: each state's same-named trace column averaged over [from, to] (the mean over the
      * last cycles when the run oscillates there); a state without a column (e.g. a motor's shaft speed, whose
-     * signal has another name) takes its value at the end of the run. Members are held the way the circuit
-     * holds them at the end of the run; a free member is in transit when over the window it travels more than
+     * signal has another name) takes its value at the end of the run. Members are held the way the run left
+     * them; a free member is in transit when over the window it travels more than
      * {@link #TRANSIT_FRACTION} of its travel and its velocity never takes the opposite sign.
      *
      * @param result a finished run
@@ -73,8 +72,9 @@ public record OperatingPointStart(double[] state, Map<String, Mode> held, Map<St
             throw new BranchsimException(ErrorKey.BAD_ARGUMENT, String.format(Locale.ROOT,
                     "no output sample between %.6g s and %.6g s to average an operating-point start over", from, to));
         }
-        Circuit circuit = result.circuit();
-        double[] y = result.finalState().clone();
+        CircuitModel circuit = result.model();
+        Map<StateSlot, Integer> positions = RunEngine.positions(circuit);
+        double[] y = result.finalState();
         for (StateSlot s : circuit.states()) {
             int column = trace.indexOf(s.name());
             if (column >= 0) {
@@ -82,29 +82,27 @@ public record OperatingPointStart(double[] state, Map<String, Mode> held, Map<St
                 for (int k : rows) {
                     sum += trace.value(k, column);
                 }
-                y[s.solverIndex()] = sum / rows.size();
+                y[positions.get(s)] = sum / rows.size();
             }
         }
-        Map<String, Mode> held = OperatingPointSolver.heldMembers(circuit);
+        Map<String, Mode> held = result.description().finalModes();
         Map<String, Double> moving = new TreeMap<>();
-        for (Element e : circuit.elements()) {
-            for (TravelLimitedMass m : e.members()) {
-                int x = trace.indexOf(m.positionSlot().name());
-                int v = trace.indexOf(m.velocitySlot().name());
-                if (held.containsKey(m.id()) || x < 0 || v < 0 || rows.size() < 2) {
-                    continue;
-                }
-                int first = rows.get(0);
-                int last = rows.get(rows.size() - 1);
-                double travel = trace.value(last, x) - trace.value(first, x);
-                boolean oneSign = true;
-                for (int k : rows) {
-                    double speed = trace.value(k, v);
-                    oneSign &= speed == 0.0 || Math.signum(speed) == Math.signum(travel);
-                }
-                if (oneSign && Math.abs(travel) > TRANSIT_FRACTION * (m.upper() - m.lower())) {
-                    moving.put(m.id(), travel / (trace.time(last) - trace.time(first)));
-                }
+        for (Member m : circuit.members()) {
+            int x = trace.indexOf(m.positionSlot().name());
+            int v = trace.indexOf(m.velocitySlot().name());
+            if (held.containsKey(m.id()) || x < 0 || v < 0 || rows.size() < 2) {
+                continue;
+            }
+            int first = rows.get(0);
+            int last = rows.get(rows.size() - 1);
+            double travel = trace.value(last, x) - trace.value(first, x);
+            boolean oneSign = true;
+            for (int k : rows) {
+                double speed = trace.value(k, v);
+                oneSign &= speed == 0.0 || Math.signum(speed) == Math.signum(travel);
+            }
+            if (oneSign && Math.abs(travel) > TRANSIT_FRACTION * (m.upper() - m.lower())) {
+                moving.put(m.id(), travel / (trace.time(last) - trace.time(first)));
             }
         }
         return new OperatingPointStart(y, held, moving);
@@ -115,21 +113,21 @@ public record OperatingPointStart(double[] state, Map<String, Mode> held, Map<St
      * is taken as in transit when its speed exceeds {@link OperatingPointSolver#MOVING_FRACTION} of its velocity
      * state's typical magnitude.
      *
-     * @param circuit the circuit to solve
-     * @param state start state, SI, in solver order
+     * @param circuit the model to solve
+     * @param state start state, SI, in the order of the model's states
      * @param held members held at the start: member id to its stop
      * @return the start
      */
-    public static OperatingPointStart fromState(Circuit circuit, double[] state, Map<String, Mode> held) {
+    public static OperatingPointStart fromState(CircuitModel circuit, double[] state, Map<String, Mode> held) {
         Map<String, Double> moving = new TreeMap<>();
-        for (Element e : circuit.elements()) {
-            for (TravelLimitedMass m : e.members()) {
-                StateSlot v = m.velocitySlot();
-                double speed = v.solverIndex() < state.length ? state[v.solverIndex()] : 0.0;
-                if (held.getOrDefault(m.id(), Mode.FREE) == Mode.FREE
-                        && Math.abs(speed) > OperatingPointSolver.MOVING_FRACTION * v.absoluteScale()) {
-                    moving.put(m.id(), speed);
-                }
+        Map<StateSlot, Integer> positions = RunEngine.positions(circuit);
+        for (Member m : circuit.members()) {
+            StateSlot v = m.velocitySlot();
+            int position = positions.get(v);
+            double speed = position < state.length ? state[position] : 0.0;
+            if (held.getOrDefault(m.id(), Mode.FREE) == Mode.FREE
+                    && Math.abs(speed) > OperatingPointSolver.MOVING_FRACTION * v.absoluteScale()) {
+                moving.put(m.id(), speed);
             }
         }
         return new OperatingPointStart(state, held, moving);

@@ -7,14 +7,16 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.Discontinuity;
 import org.branchsim.core.model.EnergyAccount;
 import org.branchsim.core.model.SignalHandle;
 import org.branchsim.core.model.StateSlot;
 import org.branchsim.core.results.EnergyBalance;
 import org.branchsim.core.results.EventRecord;
+import org.branchsim.core.results.RunDescription;
 import org.branchsim.core.results.SimulationResult;
+import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.results.SolverStatistics;
 import org.branchsim.core.results.Trace;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
@@ -30,9 +32,11 @@ import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
 import org.hipparchus.exception.LocalizedCoreFormats;
 
 /**
- * Runs a circuit in time with Hipparchus: the only place that knows the integrator. Registers every
- * discontinuity as an event detector, samples the output grid from the dense output, integrates the energy
- * accounts, and turns solver failures into {@link BranchsimException}s naming the time and the states.
+ * Runs a circuit model in time with Hipparchus: the only place that knows the integrator. Each run has its own
+ * engine (member modes, impulse ledger, work buffers), so the model is only read and one model may be run many
+ * times, on many threads at once. Registers every discontinuity as an event detector, samples the output grid
+ * from the dense output, integrates the energy accounts, and turns solver failures into
+ * {@link BranchsimException}s naming the time and the states.
  */
 public final class Simulator {
 
@@ -40,46 +44,46 @@ public final class Simulator {
     }
 
     /**
-     * @param circuit a freshly built circuit
+     * @param model the model to run (not changed)
      * @param settings solver settings
-     * @return the run's trace, statistics, energy balance and events
+     * @return the run's description, trace, statistics, energy balance and events
      * @throws BranchsimException when the integration fails
      */
-    public static SimulationResult run(Circuit circuit, SolverSettings settings) {
-        double[] y0 = circuit.initialState();
-        circuit.initialiseModes(0.0, y0);
-        circuit.clearImpulses();
+    public static SimulationResult run(CircuitModel model, SolverSettings settings) {
+        RunEngine engine = new RunEngine(model);
+        double[] y0 = model.initialState();
+        engine.initialiseModes(0.0, y0);
 
         List<Trace.Column> columns = new ArrayList<>();
-        for (SignalHandle h : circuit.signals()) {
+        for (SignalHandle h : model.signals()) {
             columns.add(new Trace.Column(h.name(), h.dimension()));
         }
         Trace trace = new Trace(columns);
-        FailureReporter reporter = new FailureReporter(circuit, 0.0, y0);
+        FailureReporter reporter = new FailureReporter(engine, 0.0, y0);
         List<EventRecord> log = new ArrayList<>();
 
-        double[] absTol = new double[circuit.dimension()];
-        double[] relTol = new double[circuit.dimension()];
-        List<StateSlot> slots = circuit.states();
+        double[] absTol = new double[model.dimension()];
+        double[] relTol = new double[model.dimension()];
+        List<StateSlot> slots = model.states();
         for (int i = 0; i < absTol.length; i++) {
             absTol[i] = settings.relativeTolerance() * slots.get(i).absoluteScale();
             relTol[i] = settings.relativeTolerance();
         }
-        AdaptiveStepsizeIntegrator integrator = IntegratorFactory.create(settings, absTol, relTol, circuit);
+        AdaptiveStepsizeIntegrator integrator = IntegratorFactory.create(settings, absTol, relTol, model);
         integrator.setMaxEvaluations((int) Math.min(Integer.MAX_VALUE, settings.maxEvaluations()));
 
         AdaptableInterval maxCheck = AdaptableInterval.of(settings.maxStep());
-        SharedView views = new SharedView(circuit);
-        for (Discontinuity d : circuit.discontinuities()) {
-            integrator.addEventDetector(new DiscontinuityDetector(circuit, views, d, log, maxCheck, 200,
+        SharedView views = new SharedView(engine);
+        for (Discontinuity d : model.discontinuities()) {
+            integrator.addEventDetector(new DiscontinuityDetector(engine, views, d, log, maxCheck, 200,
                     new BracketingNthOrderBrentSolver(0.0, settings.eventTolerance(), 0.0, 5)));
         }
-        GridSampler sampler = new GridSampler(circuit, trace, settings.outputInterval(), settings.endTime(), reporter);
-        EnergyQuadrature quadrature = new EnergyQuadrature(circuit);
+        GridSampler sampler = new GridSampler(engine, trace, settings.outputInterval(), settings.endTime(), reporter);
+        EnergyQuadrature quadrature = new EnergyQuadrature(engine);
         integrator.addStepHandler(sampler);
         integrator.addStepHandler(quadrature);
 
-        CircuitEquations equations = new CircuitEquations(circuit, reporter);
+        CircuitEquations equations = new CircuitEquations(engine, reporter);
         long start = System.nanoTime();
         ODEStateAndDerivative end;
         try {
@@ -87,7 +91,7 @@ public final class Simulator {
         } catch (BranchsimException e) {
             throw e;
         } catch (MathIllegalArgumentException | MathIllegalStateException e) {
-            throw translate(e, settings, reporter, IntegratorFactory.worstState(integrator, circuit));
+            throw translate(e, settings, reporter, IntegratorFactory.worstState(integrator, model));
         } catch (MathRuntimeException e) {
             throw new BranchsimException(ErrorKey.SOLVER_FAILED, List.of(), e,
                     reporter.time(reporter.lastTime()), e.getMessage(), reporter.describeLastGood());
@@ -102,16 +106,31 @@ public final class Simulator {
                 sampler.steps(), IntegratorFactory.rejected(integrator), integrator.getEvaluations(),
                 IntegratorFactory.jacobians(integrator), IntegratorFactory.factorisations(integrator),
                 eventCounts, wall, settings.endTime());
-        return new SimulationResult(circuit, trace, stats, energy(circuit, quadrature), List.copyOf(log),
-                end.getPrimaryState());
+        return new SimulationResult(new RunDescription(model, settings, engine.heldMembers()), trace, stats,
+                energy(engine, quadrature), log, end.getPrimaryState());
     }
 
-    private static EnergyBalance energy(Circuit circuit, EnergyQuadrature quadrature) {
+    /**
+     * The signals of a model at one instant without integrating, its members in the modes a run starting there
+     * would give them (e.g. a static characteristic, or a circuit of tanks only, which has no state to integrate).
+     *
+     * @param model the model (not changed)
+     * @param t time, s
+     * @param y state, SI, in the order of the model's states
+     * @return every signal, SI, in the model's signal order
+     */
+    public static double[] signalsAt(CircuitModel model, double t, double[] y) {
+        RunEngine engine = new RunEngine(model);
+        engine.initialiseModes(t, y);
+        return engine.sampleSignals(t, y);
+    }
+
+    private static EnergyBalance energy(RunEngine engine, EnergyQuadrature quadrature) {
         double[] integrated = quadrature.energy();
-        double[] impulses = circuit.impulses();
+        double[] impulses = engine.impulses();
         Map<String, Double> totals = new LinkedHashMap<>();
         Map<String, EnergyAccount.Kind> kinds = new LinkedHashMap<>();
-        for (EnergyAccount a : circuit.accounts()) {
+        for (EnergyAccount a : engine.model().accounts()) {
             totals.put(a.name(), integrated[a.index()] + impulses[a.index()]);
             kinds.put(a.name(), a.kind());
         }

@@ -146,8 +146,7 @@ public final class Diagnosis {
                                              List<OscillationFinding> baselineFindings, OscillationFinding f,
                                              IntConsumer progress) {
         ScanWindow w = f.window();
-        Scenario fresh = StudyRunner.build(scenario.file(), scenario.document(), Map.of());
-        SimulationResult partial = Simulator.run(fresh.circuit(), fresh.solver().withEndTime(w.to()));
+        SimulationResult partial = Simulator.run(scenario.circuit(), scenario.solver().withEndTime(w.to()));
         double cycles = Math.max(1.0, Math.floor(w.length() * f.frequency()));
         double from = Math.max(w.from(), w.to() - cycles / f.frequency());
         OperatingPoint op = null;
@@ -155,14 +154,13 @@ public final class Diagnosis {
         List<Mode> modes = List.of();
         boolean onTrajectory = false;
         try {
-            op = OperatingPointSolver.solve(fresh.circuit(), w.to(), OperatingPointSolver.startFrom(partial, from, w.to()));
-            modes = ModeAnalysis.at(fresh.circuit(), op);
+            op = OperatingPointSolver.solve(scenario.circuit(), w.to(),
+                    OperatingPointSolver.startFrom(partial, from, w.to()));
+            modes = ModeAnalysis.at(scenario.circuit(), op);
         } catch (BranchsimException e) {
             noOp = e.getMessage();
             if (options.onTrajectory()) {
-                Scenario again = StudyRunner.build(scenario.file(), scenario.document(), Map.of());
-                SimulationResult run = Simulator.run(again.circuit(), again.solver().withEndTime(w.to()));
-                modes = ModeAnalysis.onTrajectory(again.circuit(), w.to(), run.finalState());
+                modes = ModeAnalysis.onTrajectory(partial);
                 onTrajectory = true;
             }
         }

@@ -10,7 +10,7 @@ import org.branchsim.core.elements.DirectReducingValve;
 import org.branchsim.core.elements.Motor;
 import org.branchsim.core.elements.PilotReducingValve;
 import org.branchsim.core.elements.ReliefValve;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.Element;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.scenario.Located;
@@ -44,7 +44,7 @@ public final class RemedyCatalogue {
      *        most involved first
      * @return the knobs for those parts, without duplicates, most involved part first
      */
-    public static List<RemedyKnob> knobs(Located document, Circuit circuit, Collection<String> parts) {
+    public static List<RemedyKnob> knobs(Located document, CircuitModel circuit, Collection<String> parts) {
         Map<String, RemedyKnob> out = new LinkedHashMap<>();
         for (String part : parts) {
             int dot = part.indexOf('.');

@@ -18,8 +18,8 @@ import org.branchsim.core.scenario.ScenarioLoader;
 import org.branchsim.core.solve.Simulator;
 
 /**
- * Runs the variants of a study on a pool of threads. Each variant gets its own copy of the scenario
- * document and its own circuit, so the runs share nothing; results come back in variant order, so the
+ * Runs the variants of a study on a pool of threads. Each variant changes parameter values, so it gets its own
+ * copy of the scenario document and its own circuit model; results come back in variant order, so the
  * outcome does not depend on the number of threads. A variant that fails is reported with its error and
  * does not stop the others.
  */

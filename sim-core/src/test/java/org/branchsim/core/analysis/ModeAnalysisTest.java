@@ -9,14 +9,14 @@ import org.branchsim.core.elements.Cylinder;
 import org.branchsim.core.elements.PoppetGeometry;
 import org.branchsim.core.elements.ReliefValve;
 import org.branchsim.core.fluid.Fluid;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.CircuitBuilder;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.solve.OperatingPoint;
 import org.branchsim.core.solve.OperatingPointSolver;
 import org.branchsim.core.solve.Simulator;
-import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.settings.SolverSettings;
 import org.junit.jupiter.api.Test;
 
 /** Linearised modes against analytic eigenvalues, participation factors and the stability verdicts. */
@@ -51,7 +51,7 @@ class ModeAnalysisTest {
         Node cap = Node.volume("cap", 1e-9, Double.POSITIVE_INFINITY, p1);
         Node rod = Node.volume("rod", 1e-9, Double.POSITIVE_INFINITY, p2);
         Cylinder cyl = new Cylinder("cyl", cap, rod, cylinder(0.100), null, null, null, 0.0);
-        Circuit c = new CircuitBuilder("cylinder", OIL_14).add(cap).add(rod).add(cyl).build();
+        CircuitModel c = new CircuitBuilder("cylinder", OIL_14).add(cap).add(rod).add(cyl).build();
         OperatingPoint op = OperatingPointSolver.solve(c, 0.0, c.initialState(), Map.of());
         Mode m = onlyOscillatory(ModeAnalysis.at(c, op));
         assertEquals(76.6, m.naturalFrequency(), 76.6 * FREQUENCY_TOLERANCE);
@@ -77,7 +77,7 @@ class ModeAnalysisTest {
         Node cap = Node.volume("cap", 20e-6, Double.POSITIVE_INFINITY, p1);
         Node vent = Node.tank("vent", 0.0);
         Cylinder cyl = new Cylinder("cyl", cap, vent, cylinder(0.050), null, null, null, p1 * a1);
-        Circuit c = new CircuitBuilder("single", OIL_14).add(cap).add(vent).add(cyl).build();
+        CircuitModel c = new CircuitBuilder("single", OIL_14).add(cap).add(vent).add(cyl).build();
         OperatingPoint op = OperatingPointSolver.solve(c, 0.0, c.initialState(), Map.of());
         Mode m = onlyOscillatory(ModeAnalysis.at(c, op));
         double v = 20e-6 + a1 * 0.050;
@@ -89,7 +89,7 @@ class ModeAnalysisTest {
     }
 
     /** A flat-seated relief poppet (no flow force) between two tanks, floating above its seat. */
-    private static Circuit poppetBetweenTanks(double mass, double rate, double damping) {
+    private static CircuitModel poppetBetweenTanks(double mass, double rate, double damping) {
         double seat = 6e-3;
         double area = Math.PI * seat * seat / 4;
         Node in = Node.tank("in", 60e5);
@@ -110,9 +110,9 @@ class ModeAnalysisTest {
         double m = 0.02;
         double k = 40e3;
         double c = 4.0;
-        Circuit circuit = poppetBetweenTanks(m, k, c);
+        CircuitModel circuit = poppetBetweenTanks(m, k, c);
         SimulationResult r = Simulator.run(circuit, SolverSettings.defaults(0.5, 1e-3));
-        Mode onTrajectory = onlyOscillatory(ModeAnalysis.onTrajectory(circuit, 0.5, r.finalState()));
+        Mode onTrajectory = onlyOscillatory(ModeAnalysis.onTrajectory(r));
         OperatingPoint op = OperatingPointSolver.solve(circuit, 0.5, r.finalState(), Map.of());
         Mode mode = onlyOscillatory(ModeAnalysis.at(circuit, op));
         double sigma = -c / (2 * m);
@@ -139,7 +139,7 @@ class ModeAnalysisTest {
         double m = 0.02;
         double k = 40e3;
         double c = -4.0;
-        Circuit circuit = poppetBetweenTanks(m, k, c);
+        CircuitModel circuit = poppetBetweenTanks(m, k, c);
         OperatingPoint op = OperatingPointSolver.solve(circuit, 0.0, circuit.initialState(), Map.of());
         Mode mode = onlyOscillatory(ModeAnalysis.at(circuit, op));
         double sigma = -c / (2 * m);

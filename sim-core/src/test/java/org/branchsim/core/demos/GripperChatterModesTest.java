@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import org.branchsim.core.analysis.Mode;
 import org.branchsim.core.analysis.ModeAnalysis;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.scenario.ScenarioLoader;
@@ -31,7 +31,7 @@ class GripperChatterModesTest {
     void operatingPointExistsAndTheLeastDampedModeIsThePilotStage() {
         Scenario s = ScenarioLoader.load(DemoRuns.scenario("gripper-chatter"));
         SimulationResult r = Simulator.run(s.circuit(), s.solver().withEndTime(AT));
-        Circuit c = r.circuit();
+        CircuitModel c = r.model();
 
         OperatingPoint op = OperatingPointSolver.solve(c, AT, OperatingPointSolver.startFrom(r, AT - 0.055, AT));
 
@@ -41,8 +41,7 @@ class GripperChatterModesTest {
         assertTrue(!op.held().containsKey("reducer.pilot"), op.held().toString());
         // a pilot-operated reducing valve regulates within a few percent of its setting at small demand
         // (REFERENCES.md: 1-3 %, common practice, no source); 5 % allows for the spring-chamber model
-        double reduced = op.state()[c.states().stream().filter(st -> st.name().equals("reduced.p")).findFirst()
-                .orElseThrow().solverIndex()];
+        double reduced = op.stateByName().get("reduced.p");
         assertEquals(SETTING, reduced, 0.05 * SETTING);
 
         List<Mode> modes = ModeAnalysis.at(c, op);

@@ -9,7 +9,7 @@ import org.branchsim.core.results.EventRecord;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.scenario.ScenarioLoader;
-import org.branchsim.core.solve.Method;
+import org.branchsim.core.settings.Method;
 import org.branchsim.core.solve.Simulator;
 import org.branchsim.core.units.Dimension;
 import org.junit.jupiter.params.ParameterizedTest;

@@ -4,11 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.branchsim.core.TestFluids;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.CircuitBuilder;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.results.SimulationResult;
-import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.solve.Simulator;
 import org.junit.jupiter.api.Test;
 
@@ -32,7 +32,7 @@ class CylinderSpeedTest {
         Orifice vent = new Orifice("vent", rod, tank, Math.PI * 0.25 * 8e-3 * 8e-3, 0.61);
         Cylinder.Parameters p = new Cylinder.Parameters(50e-3, 28e-3, 0.3, 20.0, 10e-6, 10e-6, 0, 2000.0, 1e-3, 0.0);
         Cylinder cyl = new Cylinder("cyl", cap, rod, p, null, null, null, 1000.0);
-        Circuit c = new CircuitBuilder("speed", TestFluids.referenceOil())
+        CircuitModel c = new CircuitBuilder("speed", TestFluids.referenceOil())
                 .add(tank).add(cap).add(rod).add(pump).add(vent).add(cyl).build();
 
         // When it runs for 1 s

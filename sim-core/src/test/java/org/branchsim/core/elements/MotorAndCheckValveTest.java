@@ -4,11 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.branchsim.core.TestFluids;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.CircuitBuilder;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.results.SimulationResult;
-import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.solve.Simulator;
 import org.junit.jupiter.api.Test;
 
@@ -30,7 +30,7 @@ class MotorAndCheckValveTest {
         double b = 0.01;
         Pump pump = new Pump("pump", tank, in, q / 150.0, 150.0, 1.0);
         Motor motor = new Motor("motor", in, tank, d, 0.01, b, leak, load);
-        Circuit c = new CircuitBuilder("motor", TestFluids.referenceOil()).add(tank).add(in).add(pump).add(motor).build();
+        CircuitModel c = new CircuitBuilder("motor", TestFluids.referenceOil()).add(tank).add(in).add(pump).add(motor).build();
         SimulationResult r = Simulator.run(c, SolverSettings.defaults(2.0, 1e-3));
         double omega = r.trace().valueAt("motor.speed", 2.0);
         double dp = r.trace().valueAt("in.p", 2.0);
@@ -46,8 +46,8 @@ class MotorAndCheckValveTest {
         Node low = Node.tank("low", 0.0);
         CheckValve forward = new CheckValve("forward", high, low, 0.5e5, 2e5, 20e-6, 0.61);
         CheckValve reverse = new CheckValve("reverse", low, high, 0.5e5, 2e5, 20e-6, 0.61);
-        Circuit c = new CircuitBuilder("check", TestFluids.referenceOil()).add(high).add(low).add(forward).add(reverse).build();
-        double[] signals = c.sampleSignals(0.0, c.initialState());
+        CircuitModel c = new CircuitBuilder("check", TestFluids.referenceOil()).add(high).add(low).add(forward).add(reverse).build();
+        double[] signals = Simulator.signalsAt(c, 0.0, c.initialState());
         double qf = signals[c.signals().indexOf(c.signal("forward.q"))];
         double qr = signals[c.signals().indexOf(c.signal("reverse.q"))];
         // fully open (dp 20 bar > 0.5 + 2 bar): the orifice law at the full area (Merritt 1967)

@@ -4,12 +4,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.branchsim.core.TestFluids;
-import org.branchsim.core.model.Circuit;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.CircuitBuilder;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.Trace;
-import org.branchsim.core.solve.SolverSettings;
+import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.solve.Simulator;
 import org.junit.jupiter.api.Test;
 
@@ -36,7 +36,7 @@ class ReliefValveTest {
         double preload = SETTING * 0.25 * Math.PI * seat * seat;
         PoppetGeometry g = new PoppetGeometry(seat, Math.toRadians(90), 60e3, preload, 0.025, POPPET_DAMPING, 2e-3, 0.61);
         ReliefValve relief = new ReliefValve("relief", line, tank, g);
-        Circuit c = new CircuitBuilder("relief", TestFluids.referenceOil()).add(tank).add(line).add(pump).add(relief).build();
+        CircuitModel c = new CircuitBuilder("relief", TestFluids.referenceOil()).add(tank).add(line).add(pump).add(relief).build();
 
         // When it runs for 0.3 s
         SimulationResult r = Simulator.run(c, SolverSettings.defaults(0.3, 1e-4));

@@ -4,10 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.branchsim.core.TestFluids;
 import org.branchsim.core.elements.Pump;
-import org.branchsim.core.model.Circuit;
 import org.branchsim.core.model.CircuitBuilder;
+import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.Node;
 import org.branchsim.core.results.SimulationResult;
+import org.branchsim.core.settings.SolverSettings;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -27,7 +28,7 @@ class PressureBuildUpTest {
         double flow = 10e-3 / 60.0;
         double omega = 1500 * 2 * Math.PI / 60;
         Pump pump = new Pump("pump", tank, line, flow / omega, omega, 1.0);
-        Circuit c = new CircuitBuilder("buildup", TestFluids.referenceOil()).add(tank).add(line).add(pump).build();
+        CircuitModel c = new CircuitBuilder("buildup", TestFluids.referenceOil()).add(tank).add(line).add(pump).build();
 
         // When it runs for 37.5 ms
         SimulationResult r = Simulator.run(c, SolverSettings.defaults(0.0375, 0.0375 / 10));

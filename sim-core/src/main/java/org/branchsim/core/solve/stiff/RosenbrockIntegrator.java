@@ -20,7 +20,8 @@ import org.hipparchus.util.FastMath;
  * <p>
  * Built on Hipparchus's {@link AdaptiveStepsizeIntegrator} so that event detectors, step handlers and
  * dense output work as for the explicit methods. Dense output is cubic Hermite. The Jacobian is estimated
- * by finite differences grouped by a {@link SparsityPattern}, kept while steps are accepted, and refreshed
+ * by forward differences ({@link DifferenceJacobian}, step sqrt(eps) relative to the larger of |y_j| and the
+ * state's absolute over relative tolerance) grouped by a {@link SparsityPattern}, kept while steps are accepted, and refreshed
  * after a rejected step, after every event reset, and when it has served {@code maxJacobianAge} steps.
  * Forward integration only.
  */
@@ -48,6 +49,8 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     private static final double MIN_FACTOR = 0.2;
     private static final double MAX_FACTOR = 6.0;
     private static final double ORDER = 3.0;
+    /** Relative finite-difference step, sqrt of the unit round-off. */
+    private static final double SQRT_EPS = FastMath.sqrt(Math.ulp(1.0));
 
     private final SparsityPattern pattern;
     private final int maxJacobianAge;
@@ -131,6 +134,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         double[] k3 = new double[n];
         double[] k4 = new double[n];
         double[] yStage = new double[n];
+        DifferenceJacobian differences = differences(n);
 
         double[] scale = new double[getStepSizeHelper().getMainSetDimension()];
         for (int i = 0; i < scale.length; i++) {
@@ -146,7 +150,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
             double[] y = start.getCompleteState();
             double[] f0 = start.getCompleteDerivative();
             if (jacobianAge >= maxJacobianAge) {
-                estimateJacobian(t, y, f0, h, jac, ft);
+                estimateJacobian(differences, t, y, f0, h, jac, ft);
                 jacobianFresh = true;
                 jacobianAge = 0;
             }
@@ -169,7 +173,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
                 }
                 rejected++;
                 if (!jacobianFresh) {
-                    estimateJacobian(t, y, f0, h, jac, ft);
+                    estimateJacobian(differences, t, y, f0, h, jac, ft);
                     jacobianFresh = true;
                     jacobianAge = 0;
                 }
@@ -277,39 +281,34 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         return true;
     }
 
-    /** Finite-difference Jacobian by column groups, and the time derivative f_t. */
-    private void estimateJacobian(double t, double[] y, double[] f0, double h, double[][] jac, double[] ft) {
-        int n = y.length;
-        double sqrtEps = FastMath.sqrt(Math.ulp(1.0));
-        double[] yp = y.clone();
-        double[] delta = new double[n];
-        for (int[] group : pattern.groups()) {
-            for (int j : group) {
-                // typical magnitude of state j: absolute tolerance over relative tolerance
-                int k = Math.min(j, getStepSizeHelper().getMainSetDimension() - 1);
-                double typical = getStepSizeHelper().getTolerance(k, 0.0) / getStepSizeHelper().getRelativeTolerance(k);
-                double d = sqrtEps * FastMath.max(FastMath.abs(y[j]), typical);
-                if (d == 0.0 || !Double.isFinite(d)) {
-                    d = sqrtEps;
-                }
-                double perturbed = y[j] + d;
-                delta[j] = perturbed - y[j];
-                yp[j] = perturbed;
-            }
-            double[] fp = computeDerivatives(t, yp);
-            for (int j : group) {
-                java.util.BitSet rows = pattern.rows(j);
-                for (int i = 0; i < n; i++) {
-                    jac[i][j] = 0.0;
-                }
-                for (int i = rows.nextSetBit(0); i >= 0; i = rows.nextSetBit(i + 1)) {
-                    jac[i][j] = (fp[i] - f0[i]) / delta[j];
-                }
-                yp[j] = y[j];
-            }
+    /**
+     * @return forward differences over the pattern's column groups, step sqrt(eps) relative to the larger of
+     *         |y_j| and state j's typical magnitude (its absolute over its relative tolerance)
+     */
+    private DifferenceJacobian differences(int n) {
+        double[] typical = new double[n];
+        for (int j = 0; j < n; j++) {
+            int k = Math.min(j, getStepSizeHelper().getMainSetDimension() - 1);
+            typical[j] = getStepSizeHelper().getTolerance(k, 0.0) / getStepSizeHelper().getRelativeTolerance(k);
         }
+        return new DifferenceJacobian(DifferenceJacobian.Scheme.FORWARD, SQRT_EPS, typical, pattern.groups());
+    }
+
+    /** Finite-difference Jacobian by column groups, and the time derivative f_t. */
+    private void estimateJacobian(DifferenceJacobian differences, double t, double[] y, double[] f0, double h,
+                                  double[][] jac, double[] ft) {
+        int n = y.length;
+        differences.estimate(yp -> computeDerivatives(t, yp), y, f0, (j, quotient) -> {
+            java.util.BitSet rows = pattern.rows(j);
+            for (int i = 0; i < n; i++) {
+                jac[i][j] = 0.0;
+            }
+            for (int i = rows.nextSetBit(0); i >= 0; i = rows.nextSetBit(i + 1)) {
+                jac[i][j] = quotient.applyAsDouble(i);
+            }
+        });
         if (timeDependent.test(t)) {
-            double dt = sqrtEps * FastMath.max(FastMath.abs(t), FastMath.abs(h));
+            double dt = SQRT_EPS * FastMath.max(FastMath.abs(t), FastMath.abs(h));
             double[] fT = computeDerivatives(t + dt, y);
             for (int i = 0; i < n; i++) {
                 ft[i] = (fT[i] - f0[i]) / dt;

@@ -1,4 +1,4 @@
-package org.branchsim.core.solve;
+package org.branchsim.core.settings;
 
 /** Integration methods a scenario can choose. */
 public enum Method {

@@ -1,4 +1,4 @@
-package org.branchsim.core.solve;
+package org.branchsim.core.settings;
 
 import java.util.Locale;
 import org.branchsim.core.error.BranchsimException;
