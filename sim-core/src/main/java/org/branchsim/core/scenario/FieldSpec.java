@@ -158,7 +158,7 @@ public final class FieldSpec {
         f.min = min;
         f.max = max;
         f.defaultSi = defaultValue;
-        f.defaultText = Units.plain(defaultValue);
+        f.defaultText = plain(defaultValue);
         f.literalDefault = true;
         return f;
     }
@@ -463,6 +463,11 @@ public final class FieldSpec {
         List<String> each = words.stream()
                 .map(w -> "\"" + w.word() + "\"" + (w.gloss().isEmpty() ? "" : " (" + w.gloss() + ")")).toList();
         return each.size() == 2 ? each.get(0) + " or " + each.get(1) : "one of " + String.join(", ", each);
+    }
+
+    /** @return a number as the reference writes it, e.g. 1e-6 (no leading zeros in the exponent) */
+    static String plain(double value) {
+        return Units.plain(value).replaceAll("e([-+]?)0+(\\d)", "e$1$2");
     }
 
     @Override

@@ -35,7 +35,10 @@ final class FieldText {
     /** @return the default as the reference shows it, or a word saying there is none */
     static String defaultValue(FieldSpec f, BlockSpec owner) {
         if (f.defaultText() != null && !f.defaultText().isEmpty()) {
-            return f.defaultText().equals("\"\"") ? "empty" : f.defaultText();
+            if (f.defaultText().equals("\"\"")) {
+                return "empty";
+            }
+            return f.hasLiteralDefault() ? "`" + f.defaultText() + "`" : f.defaultText();
         }
         Choice c = owner.choiceOf(f.name());
         if (c != null) {

@@ -6,7 +6,6 @@ import org.branchsim.core.model.Circuit;
 import org.branchsim.core.solve.Method;
 import org.branchsim.core.solve.SolverSettings;
 import org.branchsim.core.units.Dimension;
-import org.branchsim.core.units.Units;
 
 /**
  * The {@code solver} section: end time, output grid, tolerances, step limits and the integration method, read
@@ -23,10 +22,10 @@ final class SolverSection {
                     .meaning("relative error tolerance of the integrator"),
             FieldSpec.positive("maxStep", Dimension.TIME).computedDefault(Double.NaN, "max(outputInterval, endTime/100)")
                     .meaning("longest integration step"),
-            FieldSpec.positive("minStep", Dimension.TIME).byDefault(Units.plain(SolverSettings.DEFAULT_MIN_STEP) + " s")
+            FieldSpec.positive("minStep", Dimension.TIME).byDefault(FieldSpec.plain(SolverSettings.DEFAULT_MIN_STEP) + " s")
                     .meaning("a smaller step needed means failure (exit code 1)"),
             FieldSpec.positive("eventTolerance", Dimension.TIME)
-                    .byDefault(Units.plain(SolverSettings.DEFAULT_EVENT_TOLERANCE) + " s")
+                    .byDefault(FieldSpec.plain(SolverSettings.DEFAULT_EVENT_TOLERANCE) + " s")
                     .meaning("accuracy of event times"),
             FieldSpec.number("maxEvaluations", 1000, 1e10, SolverSettings.DEFAULT_MAX_EVALUATIONS)
                     .meaning("derivative evaluations allowed"),

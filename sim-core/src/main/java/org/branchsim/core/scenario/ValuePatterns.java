@@ -25,24 +25,32 @@ public final class ValuePatterns {
 
     /** @return the pattern of a whole value of the dimension, anchored at both ends */
     public static String of(Dimension dimension) {
-        String unit = units(dimension);
+        String unit = unit(dimension);
         if (dimension == Dimension.DIMENSIONLESS) {
             unit = "(?:" + unit + ")?";
         }
-        return "^\\s*" + NUMBER + "\\s*" + unit
-                + "(?:\\s*(?:\u00b1|\\+/-|\\+-)\\s*" + NUMBER + "\\s*(?:" + unit + "|%)"
-                + "|\\s*\\.\\.\\s*" + NUMBER + "\\s*" + unit + ")?\\s*$";
+        return "^\\s*" + NUMBER + unit
+                + "(?:\\s*(?:\u00b1|\\+/-|\\+-)\\s*" + NUMBER + "(?:" + unit + "|\\s*%)"
+                + "|\\s*\\.\\.\\s*" + NUMBER + unit + ")?\\s*$";
     }
 
-    /** @return an alternation of every spelling of the dimension's units, longest first */
-    static String units(Dimension dimension) {
+    /**
+     * @return the unit after a number: any spelling of the dimension, after optional spaces; a spelling that
+     *         starts with a digit ("1/min") only after a space, as the reader takes the digit for the number's
+     */
+    static String unit(Dimension dimension) {
         List<Units.Spelling> spellings = new ArrayList<>(Units.spellingsOf(dimension));
         spellings.sort(Comparator.comparingInt((Units.Spelling s) -> s.text().length()).reversed());
-        List<String> alternatives = new ArrayList<>();
+        List<String> glued = new ArrayList<>();
+        List<String> spaced = new ArrayList<>();
         for (Units.Spelling s : spellings) {
-            alternatives.add(spelling(s.text(), s.anyCase()));
+            (Character.isDigit(s.text().charAt(0)) ? spaced : glued).add(spelling(s.text(), s.anyCase()));
         }
-        return "(?:" + String.join("|", alternatives) + ")";
+        String out = "\\s*(?:" + String.join("|", glued) + ")";
+        if (!spaced.isEmpty()) {
+            out = "(?:" + out + "|\\s+(?:" + String.join("|", spaced) + "))";
+        }
+        return out;
     }
 
     /** @return the pattern of one spelling with the variants the reader's normalisation accepts */
