@@ -24,7 +24,7 @@ final class BlockReader {
      * holds nothing else).
      */
     static Reading read(Fields f, BlockSpec spec) {
-        Reading r = new Reading(f, spec);
+        Reading r = new Reading(f);
         Map<Choice, Integer> decided = new HashMap<>();
         for (FieldSpec field : spec.fields()) {
             Choice c = spec.choiceOf(field.name());

@@ -63,11 +63,6 @@ public record BlockSpec(String title, List<FieldSpec> fields, List<Choice> choic
         return new BlockSpec(title, f, choices, checks);
     }
 
-    /** @return a copy under another title */
-    public BlockSpec titled(String newTitle) {
-        return new BlockSpec(newTitle, fields, choices, checks);
-    }
-
     /** @return the field of that name, or null */
     public FieldSpec field(String name) {
         for (FieldSpec f : fields) {

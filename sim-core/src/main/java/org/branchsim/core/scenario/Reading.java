@@ -12,15 +12,13 @@ import java.util.Map;
  */
 public final class Reading {
     private final Fields fields;
-    private final BlockSpec spec;
     private final int problemsBefore;
     private final Map<String, Double> numbers = new HashMap<>();
     private final Map<String, String> texts = new HashMap<>();
     private final Map<String, Reading> blocks = new HashMap<>();
 
-    Reading(Fields fields, BlockSpec spec) {
+    Reading(Fields fields) {
         this.fields = fields;
-        this.spec = spec;
         this.problemsBefore = fields.problems().count();
     }
 
@@ -34,15 +32,6 @@ public final class Reading {
 
     void putBlock(String name, Reading value) {
         blocks.put(name, value);
-    }
-
-    Fields fields() {
-        return fields;
-    }
-
-    /** @return the block's declaration */
-    public BlockSpec spec() {
-        return spec;
     }
 
     /**
@@ -89,11 +78,6 @@ public final class Reading {
         return fields.node().get(name);
     }
 
-    /** @return the field's path for messages, e.g. {@code elements[2].spool.stroke} */
-    public String path(String name) {
-        return fields.path(name);
-    }
-
     /**
      * Records a problem with a field's value: what was expected, and the value as written.
      *
@@ -109,10 +93,5 @@ public final class Reading {
     /** Records a problem at a field with its own "found" text. */
     public void problem(String name, String expected, String found) {
         fields.problem(name, expected, found);
-    }
-
-    /** Records a note about a field that does not stop the scenario. */
-    public void note(String name, String text) {
-        fields.note(name, text);
     }
 }

@@ -1,7 +1,5 @@
 package org.branchsim.core.scenario;
 
-import java.util.List;
-
 /**
  * The top level of a scenario file, declared as data: the head fields ({@code $schema}, {@code formatVersion},
  * {@code name}, {@code description}) and one field per section, each section's block declared by its reader
@@ -36,10 +34,5 @@ public final class ScenarioFormat {
             FieldSpec.block("outputs", OutputsSection.SPEC).meaning("how to present the results"));
 
     private ScenarioFormat() {
-    }
-
-    /** @return the section blocks by name, in file order (fluid, solver, outputs; lists aside) */
-    public static List<FieldSpec> sections() {
-        return ROOT.fields().stream().filter(f -> HEAD.field(f.name()) == null).toList();
     }
 }
