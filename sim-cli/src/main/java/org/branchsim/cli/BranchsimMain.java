@@ -13,7 +13,7 @@ import picocli.CommandLine.Command;
         description = "Time-domain simulation of hydraulic circuits with a pressure-reducing branch.",
         subcommands = {RunCommand.class, CheckCommand.class, SweepCommand.class, ModesCommand.class,
             DiagnoseCommand.class, ToleranceCommand.class, MergeCommand.class, TimingCommand.class,
-            CommandLine.HelpCommand.class},
+            SchemaCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Exit codes: 0 success, 1 simulation failed, 2 bad input or usage.",
             "Caution: " + Cautions.SHORT})
 public final class BranchsimMain implements Runnable {

@@ -51,6 +51,11 @@ final class Problems {
         return List.copyOf(notes);
     }
 
+    /** @return the number of problems recorded so far */
+    int count() {
+        return list.size();
+    }
+
     boolean isEmpty() {
         return list.isEmpty();
     }

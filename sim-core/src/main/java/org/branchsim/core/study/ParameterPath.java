@@ -4,12 +4,17 @@ import java.util.ArrayList;
 import java.util.List;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.scenario.ElementCatalog;
+import org.branchsim.core.scenario.FieldPaths;
+import org.branchsim.core.scenario.FieldSpec;
 import org.branchsim.core.scenario.Located;
 
 /**
  * The address of one value in a scenario document, written with dots. List items of {@code nodes} and
  * {@code elements} are picked by their id: {@code elements.reducer.dampingOrifice.diameter},
- * {@code nodes.clampLine.volume}, {@code fluid.bulkModulus}, {@code solver.relativeTolerance}.
+ * {@code nodes.clampLine.volume}, {@code fluid.bulkModulus}, {@code solver.relativeTolerance}. A path must
+ * name a field the descriptors declare ({@link FieldPaths}): a misspelt field is refused with the place in the
+ * file the path stopped at and the fields there, before any value is read or written.
  */
 public final class ParameterPath {
     private final String text;
@@ -44,8 +49,31 @@ public final class ParameterPath {
         return text;
     }
 
-    /** @return the located value this path names in the document (it must already exist there) */
+    /**
+     * @param root the scenario document
+     * @return the declared field this path names, with the node or element it belongs to
+     * @throws BranchsimException BAD_ARGUMENT, located, when the path names no declared field
+     */
+    public FieldPaths.Target target(Located root) {
+        try {
+            return FieldPaths.resolve(segments, root, ElementCatalog.standard());
+        } catch (IllegalArgumentException e) {
+            throw refused(e.getMessage());
+        }
+    }
+
+    /**
+     * @param root the scenario document
+     * @return the declaration of the field this path names (its dimension, bounds, remedy role)
+     * @throws BranchsimException BAD_ARGUMENT, located, when the path names no declared field
+     */
+    public FieldSpec field(Located root) {
+        return target(root).field();
+    }
+
+    /** @return the located value this path names in the document (it must be declared and already written there) */
     public Located find(Located root) {
+        target(root);
         return locate(root, false);
     }
 
@@ -54,6 +82,7 @@ public final class ParameterPath {
      * itself must already exist, so that a mistyped path is caught instead of adding an unknown field.
      */
     public void set(Located root, Object value) {
+        target(root);
         Located.Obj parent = (Located.Obj) locate(root, true);
         String last = segments.get(segments.size() - 1);
         Located old = parent.get(last);
@@ -62,9 +91,10 @@ public final class ParameterPath {
 
     /**
      * Sets the value, adding the field when its parent object exists but the field does not (an optional
-     * field left at its default). The scenario reader still checks that the field is one it knows.
+     * field left at its default). The field must be one the descriptors declare.
      */
     public void setOrAdd(Located root, Object value) {
+        target(root);
         Located parent = segments.size() == 1 ? root : locateParentAllowingMissingLeaf(root);
         if (!(parent instanceof Located.Obj o)) {
             throw missing(segments.size() - 1, parent);
@@ -142,7 +172,10 @@ public final class ParameterPath {
             }
             known = " (ids there: " + String.join(", ", ids) + ")";
         }
-        return new BranchsimException(ErrorKey.BAD_ARGUMENT, "parameter path \"" + text + "\": no \""
-                + segments.get(index) + "\" in the scenario" + known);
+        return refused("no \"" + segments.get(index) + "\" in the scenario" + known);
+    }
+
+    private BranchsimException refused(String reason) {
+        return new BranchsimException(ErrorKey.BAD_ARGUMENT, "parameter path \"" + text + "\": " + reason);
     }
 }

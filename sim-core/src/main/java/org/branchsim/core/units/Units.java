@@ -286,6 +286,27 @@ public final class Units {
     }
 
     /**
+     * A way of writing a unit that scenarios may use.
+     *
+     * @param text the spelling as the table lists it (products with '*', powers with '^')
+     * @param anyCase true when it is also read in any case
+     * @param unit the unit it stands for
+     */
+    public record Spelling(String text, boolean anyCase, Unit unit) {
+    }
+
+    /** @return every spelling accepted for a dimension, in table order (for patterns such as a JSON Schema's) */
+    public static List<Spelling> spellingsOf(Dimension dimension) {
+        List<Spelling> out = new ArrayList<>();
+        for (Entry e : TABLE) {
+            if (e.unit().dimension() == dimension) {
+                e.spellings().forEach(s -> out.add(new Spelling(s, e.anyCase(), e.unit())));
+            }
+        }
+        return Collections.unmodifiableList(out);
+    }
+
+    /**
      * @param symbol canonical or alias symbol
      * @return the unit
      * @throws IllegalArgumentException when the symbol is unknown (a programming error at this level)
