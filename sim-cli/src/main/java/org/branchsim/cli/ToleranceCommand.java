@@ -59,21 +59,18 @@ public final class ToleranceCommand implements Callable<Integer> {
                 scenario.file())) {
             List<ToleranceStudy.Parameter> params = ToleranceStudy.parameters(base.document());
             if (params.isEmpty()) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, base.file() + ":" + base.document().line() + ":"
-                        + base.document().column() + ": no value is written with a tolerance; "
-                        + "write e.g. \"diameter\": \"0.8 mm \u00b1 0.02 mm\", \"springRate\": \"15 N/mm \u00b1 10 %\" or "
-                        + "\"bulkModulus\": \"1.2 GPa .. 1.6 GPa\"");
+                throw new BranchsimException(ErrorKey.NO_TOLERANCED_VALUE, base.file() + ":" + base.document().line() + ":"
+                        + base.document().column());
             }
             List<String> predicted = StudyTable.columnsOf(base);
             String metric = histogram != null ? StudyTable.resolve("--histogram", histogram, predicted)
                     : predicted.stream().filter(c -> c.contains("overshoot")).findFirst().orElse(predicted.get(0));
             List<Variant> variants = ToleranceStudy.draw(params, runs, seed);
             PrintWriter err = spec.commandLine().getErr();
-            long start = System.nanoTime();
             List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), variants, n,
-                    d -> SweepCommand.progress(err, d, runs, start), o -> StudyTable.Row.of(o, base.units(), List.of()));
+                    new VariantProgress(err, runs)::done, o -> StudyTable.Row.of(o, base.units(), List.of()));
             err.println();
-            SweepCommand.requireOneSuccess(rows);
+            StudyTable.requireOneSuccess(rows);
             List<String> cols = StudyTable.columns(rows);
             List<ToleranceStudy.Statistics> stats = new ArrayList<>();
             for (String c : cols) {

@@ -101,14 +101,13 @@ public final class OperatingPointSolver {
      *
      * @param circuit a circuit
      * @param held member id to its stop
-     * @throws BranchsimException BAD_ARGUMENT when an id names no member of the circuit
+     * @throws BranchsimException UNKNOWN_MEMBER when an id names no member of the circuit
      */
     public static void holdMembers(Circuit circuit, Map<String, Mode> held) {
         Map<String, TravelLimitedMass> members = members(circuit);
         for (String id : held.keySet()) {
             if (!members.containsKey(id)) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "no member \"" + id + "\" in circuit "
-                        + circuit.name() + "; members: " + String.join(", ", members.keySet()));
+                throw new BranchsimException(ErrorKey.UNKNOWN_MEMBER, id, circuit.name(), String.join(", ", members.keySet()));
             }
         }
         for (TravelLimitedMass m : members.values()) {
@@ -162,9 +161,8 @@ public final class OperatingPointSolver {
     private static Attempt run(Circuit circuit, double t, OperatingPointStart start) {
         double[] y = start.state();
         if (y.length != circuit.dimension() || !Double.isFinite(t)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, String.format(Locale.ROOT,
-                    "an operating-point start needs %d states and a finite time, found %d states at t = %s",
-                    circuit.dimension(), y.length, t));
+            throw new BranchsimException(ErrorKey.START_STATE_MISMATCH, String.valueOf(circuit.dimension()),
+                    String.valueOf(y.length), String.valueOf(t));
         }
         Map<String, TravelLimitedMass> members = members(circuit);
         Map<String, Mode> held = new TreeMap<>(start.held());

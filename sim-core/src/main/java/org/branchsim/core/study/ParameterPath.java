@@ -23,16 +23,14 @@ public final class ParameterPath {
     /**
      * @param text dotted path
      * @return the path
-     * @throws BranchsimException BAD_ARGUMENT when the text is empty or has empty segments
+     * @throws BranchsimException PARAMETER_PATH_MALFORMED when the text is empty or has empty segments
      */
     public static ParameterPath parse(String text) {
         String[] parts = text.split("\\.", -1);
         List<String> segs = new ArrayList<>();
         for (String p : parts) {
             if (p.isBlank()) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT,
-                        "parameter path \"" + text + "\": expected names separated by single dots, e.g. "
-                                + "elements.reducer.dampingOrifice.diameter");
+                throw new BranchsimException(ErrorKey.PARAMETER_PATH_MALFORMED, text);
             }
             segs.add(p.trim());
         }
@@ -142,7 +140,6 @@ public final class ParameterPath {
             }
             known = " (ids there: " + String.join(", ", ids) + ")";
         }
-        return new BranchsimException(ErrorKey.BAD_ARGUMENT, "parameter path \"" + text + "\": no \""
-                + segments.get(index) + "\" in the scenario" + known);
+        return new BranchsimException(ErrorKey.UNKNOWN_PARAMETER_PATH, text, segments.get(index), known);
     }
 }
