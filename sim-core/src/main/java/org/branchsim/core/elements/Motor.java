@@ -54,11 +54,6 @@ public final class Motor implements Element {
         this.loadTorque = new ScheduledInput(id + ".loadTorque", Dimension.TORQUE, initialLoadTorque);
     }
 
-    /** @return the load torque schedule, N*m */
-    public ScheduledInput loadTorque() {
-        return loadTorque;
-    }
-
     @Override
     public String id() {
         return id;

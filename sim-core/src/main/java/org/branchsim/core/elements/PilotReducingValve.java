@@ -158,26 +158,6 @@ public final class PilotReducingValve implements Element, ReducingValve {
         return setting;
     }
 
-    /** @return the main stage */
-    public MainStage main() {
-        return main;
-    }
-
-    /** @return the pilot poppet */
-    public PoppetGeometry pilotPoppet() {
-        return pilot;
-    }
-
-    /** @return the main spool member (for diagnostics) */
-    public TravelLimitedMass spool() {
-        return spool;
-    }
-
-    /** @return the pilot poppet member (for diagnostics) */
-    public TravelLimitedMass poppet() {
-        return poppet;
-    }
-
     @Override
     public String id() {
         return id;

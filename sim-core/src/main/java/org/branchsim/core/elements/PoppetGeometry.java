@@ -50,11 +50,6 @@ public final class PoppetGeometry {
         return seatDiameter;
     }
 
-    /** @return full cone angle, rad */
-    public double coneAngle() {
-        return coneAngle;
-    }
-
     /** @return spring rate, N/m */
     public double springRate() {
         return springRate;
@@ -78,11 +73,6 @@ public final class PoppetGeometry {
     /** @return lift at the stop, m */
     public double maxLift() {
         return maxLift;
-    }
-
-    /** @return discharge coefficient */
-    public double cd() {
-        return cd;
     }
 
     /** @return seat area the pressure acts on, m^2 */

@@ -43,11 +43,6 @@ public final class Pump implements Element {
         this.speed = new ScheduledInput(id + ".speed", Dimension.ROTATIONAL_SPEED, speed);
     }
 
-    /** @return the speed schedule, rad/s */
-    public ScheduledInput speed() {
-        return speed;
-    }
-
     @Override
     public String id() {
         return id;
