@@ -235,16 +235,16 @@ public final class TimingCommand implements Callable<Integer> {
      *         --sweep-parameter when the path names no number there
      */
     private Object sweepValue(Scenario base) {
-        Object current;
+        Located at;
         try {
-            Located at = ParameterPath.parse(sweepParameter).find(base.document());
-            current = at instanceof Located.Scalar sc ? sc.value() : null;
+            at = ParameterPath.parse(sweepParameter).find(base.document());
         } catch (BranchsimException e) {
             throw e.within("--sweep-parameter for " + base.file() + " (or --sweep-variants 0)");
         }
+        Object current = at instanceof Located.Scalar sc ? sc.value() : null;
         if (ValueText.dimensionOf(current) == null) {
             throw new BranchsimException(ErrorKey.PARAMETER_NOT_NUMERIC, "--sweep-parameter " + sweepParameter,
-                    String.valueOf(current));
+                    at.describe());
         }
         return current;
     }

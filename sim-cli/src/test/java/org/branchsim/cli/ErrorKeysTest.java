@@ -85,6 +85,9 @@ class ErrorKeysTest {
                 .getMessage();
         assertTrue(big.contains("expected values the scenario accepts") && big.endsWith("found \"3 m\""), big);
         raised(ErrorKey.UNKNOWN_PARAMETER_PATH, "timing", "--sweep-parameter", "elements.nothing.diameter", FEED);
+        String block = raised(ErrorKey.PARAMETER_NOT_NUMERIC, "timing", "--sweep-parameter", "elements.relief", FEED)
+                .getMessage();
+        assertTrue(block.endsWith("found an object"), block);
     }
 
     @Test
