@@ -10,7 +10,6 @@ import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.ScanWindow;
 import org.branchsim.core.elements.ReducingValve;
 import org.branchsim.core.error.BranchsimException;
-import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.study.Diagnosis;
 import org.branchsim.core.units.Dimension;
@@ -64,21 +63,17 @@ public final class DiagnoseCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (!(margin > 0.0 && margin < 1.0)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT,
-                    "--margin: expected a damping ratio between 0 and 1 (exclusive), found " + margin);
+            throw OptionChecks.outOfRange("--margin", "a damping ratio between 0 and 1 (exclusive)", String.valueOf(margin));
         }
-        if (threads != null && threads < 1) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--threads: expected at least 1, found " + threads);
-        }
+        int n = OptionChecks.threads(threads);
         Scenario s = scenario.load();
         ScanWindow given = window == null ? null : parseWindow(window, s.solver().endTime());
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         PrintWriter err = spec.commandLine().getErr();
-        long start = System.nanoTime();
+        VariantProgress progress = new VariantProgress(err, -1);
         try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-diagnosis"),
                 scenario.file())) {
             Diagnosis.Report r = Diagnosis.run(s, new Diagnosis.Options(margin, given, onTrajectory, n),
-                    done -> SweepCommand.progress(err, done, -1, start));
+                    progress::done);
             err.println();
             String text = DiagnosisText.text(r);
             folder.writeText("diagnosis.txt", text);
@@ -131,15 +126,15 @@ public final class DiagnoseCommand implements Callable<Integer> {
     /** Parses "FROM..TO" (two times with units) into a window inside the run. */
     static ScanWindow parseWindow(String text, double endTime) {
         String[] ends = text.split("\\.\\.", -1);
-        String expected = "--window: expected two times with units inside the run (0 to "
-                + org.branchsim.core.study.ValueText.format(endTime) + " s), e.g. \"0.4 s..0.6 s\", found \"" + text + "\"";
+        BranchsimException refused = OptionChecks.unreadable("--window", "two times with units inside the run (0 to "
+                + org.branchsim.core.study.ValueText.format(endTime) + " s), e.g. \"0.4 s..0.6 s\"", "\"" + text + "\"");
         if (ends.length != 2) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, expected);
+            throw refused;
         }
         Quantity.Parsed a = Quantity.parse(ends[0].trim(), Dimension.TIME);
         Quantity.Parsed b = Quantity.parse(ends[1].trim(), Dimension.TIME);
         if (!a.ok() || !b.ok() || !(a.si() >= 0.0) || !(b.si() > a.si()) || b.si() > endTime) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, expected);
+            throw refused;
         }
         return ScanWindow.given(a.si(), b.si());
     }

@@ -1,5 +1,9 @@
 package org.branchsim.cli;
 
+import org.branchsim.core.error.BranchsimException;
+
+import org.branchsim.core.error.ErrorKey;
+
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -74,23 +78,24 @@ public final class MergeCommand implements Callable<Integer> {
         for (ShardFolder.Content p : parts) {
             String difference = StudyDefinition.firstDifference(first.studyJson(), p.studyJson());
             if (difference != null) {
-                throw OptionChecks.bad("SHARD_FOLDER " + p.folder() + ": expected a shard of the study in "
-                        + first.folder() + " (every folder from one study), found another study; first difference, "
-                        + difference);
+                throw new BranchsimException(ErrorKey.SHARD_FOLDER_REFUSED, String.valueOf(p.folder()),
+                        "a shard of the study in " + first.folder() + " (every folder from one study)",
+                        "another study; first difference, " + difference);
             }
         }
         for (ShardFolder.Content p : parts) {
             if (p.shard().n() != first.shard().n()) {
-                throw OptionChecks.bad("SHARD_FOLDER " + p.folder() + ": expected a shard of " + first.shard().n()
-                        + " like " + first.folder() + " (shard " + first.shard() + "), found shard " + p.shard());
+                throw new BranchsimException(ErrorKey.SHARD_FOLDER_REFUSED, String.valueOf(p.folder()),
+                        "a shard of " + first.shard().n() + " like " + first.folder() + " (shard " + first.shard() + ")",
+                        "shard " + p.shard());
             }
         }
         Map<Integer, Path> byK = new TreeMap<>();
         for (ShardFolder.Content p : parts) {
             Path before = byK.putIfAbsent(p.shard().k(), p.folder());
             if (before != null) {
-                throw OptionChecks.bad("SHARD_FOLDER " + p.folder() + ": expected each shard once, found shard "
-                        + p.shard() + " again (also in " + before + ")");
+                throw new BranchsimException(ErrorKey.SHARD_FOLDER_REFUSED, String.valueOf(p.folder()),
+                        "each shard once", "shard " + p.shard() + " again (also in " + before + ")");
             }
         }
         int n = first.shard().n();
@@ -101,9 +106,9 @@ public final class MergeCommand implements Callable<Integer> {
                     missing.add(k + "/" + n);
                 }
             }
-            throw OptionChecks.bad("SHARD_FOLDER: expected all " + n + " shards of the study, found "
-                    + byK.size() + " (" + byK.keySet().stream().map(k -> k + "/" + n).collect(Collectors.joining(", "))
-                    + "); missing " + String.join(", ", missing));
+            throw new BranchsimException(ErrorKey.SHARD_FOLDER_REFUSED, "(all of them)",
+                    "all " + n + " shards of the study", byK.size() + " (" + byK.keySet().stream().map(k -> k + "/" + n)
+                    .collect(Collectors.joining(", ")) + "); missing " + String.join(", ", missing));
         }
     }
 }

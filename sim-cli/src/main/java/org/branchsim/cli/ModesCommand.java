@@ -81,16 +81,15 @@ public final class ModesCommand implements Callable<Integer> {
     public Integer call() {
         Quantity.Parsed parsed = Quantity.parse(at, Dimension.TIME);
         if (!parsed.ok() || !(parsed.si() > 0)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--at: expected a positive time such as \"1.2 s\", found \""
-                    + at + "\"");
+            throw OptionChecks.unreadable("--at", "a positive time such as \"1.2 s\"", "\"" + at + "\"");
         }
         double zeta = margin();
         Scenario s = scenario.load();
         double t = parsed.si();
         double end = s.solver().endTime();
         if (t > end * (1 + 1e-12)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, String.format(Locale.ROOT,
-                    "--at: expected a time in (0 s, %s s] (the scenario's end time), found \"%s\"", ValueText.format(end), at));
+            throw OptionChecks.outOfRange("--at", "a time in (0 s, " + ValueText.format(end) + " s] (the scenario's end time)",
+                    "\"" + at + "\"");
         }
         try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-modes"),
                 scenario.file())) {
@@ -193,8 +192,8 @@ public final class ModesCommand implements Callable<Integer> {
             zeta = Double.NaN;
         }
         if (!(zeta > 0.0 && zeta < 1.0)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT,
-                    "--margin: expected a damping ratio between 0 and 1 (exclusive), such as 0.05, found \"" + margin + "\"");
+            throw OptionChecks.outOfRange("--margin", "a damping ratio between 0 and 1 (exclusive), such as 0.05",
+                    "\"" + margin + "\"");
         }
         return zeta;
     }

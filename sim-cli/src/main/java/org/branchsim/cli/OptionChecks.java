@@ -28,15 +28,26 @@ final class OptionChecks {
         return (int) count("--threads", asked, 1, MAX_THREADS);
     }
 
-    /** @return {@code value} when it is within [min, max]; otherwise refuses it */
+    /** @return {@code value} when it is within [min, max]; otherwise refuses it (OPTION_OUT_OF_RANGE) */
     static long count(String option, long value, long min, long max) {
         if (value < min || value > max) {
-            throw bad(option + ": expected a whole number from " + min + " to " + max + ", found " + value);
+            throw outOfRange(option, "a whole number from " + min + " to " + max, String.valueOf(value));
         }
         return value;
     }
 
-    static BranchsimException bad(String message) {
-        return new BranchsimException(ErrorKey.BAD_ARGUMENT, message);
+    /** @return the refusal of an option's value outside its limits: "OPTION: expected ..., found ..." */
+    static BranchsimException outOfRange(String option, String expected, String found) {
+        return new BranchsimException(ErrorKey.OPTION_OUT_OF_RANGE, option, expected, found);
+    }
+
+    /** @return the refusal of an option's text that cannot be read: "OPTION: expected ..., found ..." */
+    static BranchsimException unreadable(String option, String expected, String found) {
+        return new BranchsimException(ErrorKey.OPTION_UNREADABLE, option, expected, found);
+    }
+
+    /** @return the refusal of an option that names one thing twice: "OPTION: expected each WHAT once, found ..." */
+    static BranchsimException repeated(String option, String what, String found) {
+        return new BranchsimException(ErrorKey.OPTION_REPEATED, option, what, found);
     }
 }

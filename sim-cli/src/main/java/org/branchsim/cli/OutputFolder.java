@@ -77,7 +77,7 @@ public final class OutputFolder implements AutoCloseable {
 
     /**
      * @param dir the target folder, checked at once (see the class comment)
-     * @throws BranchsimException BAD_ARGUMENT naming {@code --out} when the target cannot be used
+     * @throws BranchsimException OUTPUT_FOLDER_REFUSED naming {@code --out} when the target cannot be used
      */
     public OutputFolder(Path dir) {
         this(dir, new Path[0]);
@@ -86,7 +86,7 @@ public final class OutputFolder implements AutoCloseable {
     /**
      * @param dir the target folder, checked at once (see the class comment)
      * @param inputs files the command reads, which the target must not hold
-     * @throws BranchsimException BAD_ARGUMENT naming {@code --out} when the target cannot be used
+     * @throws BranchsimException OUTPUT_FOLDER_REFUSED naming {@code --out} when the target cannot be used
      */
     public OutputFolder(Path dir, Path... inputs) {
         this.dir = dir;
@@ -367,32 +367,31 @@ public final class OutputFolder implements AutoCloseable {
      * @param dir the folder as given
      * @param inputs files the command reads
      * @return the folder as an absolute, normalised path
-     * @throws BranchsimException BAD_ARGUMENT naming {@code --out}, what was expected and what was found
+     * @throws BranchsimException OUTPUT_FOLDER_REFUSED naming {@code --out}, what was expected and what was found
      */
     static Path check(Path dir, Path... inputs) {
         String shown = "--out \"" + dir + "\"";
         if (dir.toString().isBlank()) {
-            throw bad("--out: expected a folder name, found an empty name");
+            throw bad("--out", "a folder name", "an empty name");
         }
         Path abs = dir.toAbsolutePath().normalize();
         if (abs.getParent() == null || abs.getFileName() == null) {
-            throw bad(shown + ": expected a folder inside another folder (it is replaced as a whole), found the root");
+            throw bad(shown, "a folder inside another folder (it is replaced as a whole)", "the root");
         }
         for (Path input : inputs) {
             if (input != null && inside(input, abs)) {
-                throw bad(shown + ": expected a folder that does not hold the input " + input
-                        + " (the whole folder is replaced), found the input inside it");
+                throw bad(shown, "a folder that does not hold the input " + input + " (the whole folder is replaced)",
+                        "the input inside it");
             }
         }
         if (Files.exists(abs) && !Files.isDirectory(abs)) {
-            throw bad(shown + ": expected a folder, found a file that is not a folder");
+            throw bad(shown, "a folder", "a file that is not a folder");
         }
         if (Files.isDirectory(abs)) {
             List<String> foreign = foreignEntries(abs);
             if (!foreign.isEmpty()) {
-                throw bad(shown + ": expected a new or empty folder, or one branchsim wrote (the whole folder is "
-                        + "replaced), found other files in it: " + String.join(", ", foreign)
-                        + "; choose another folder or empty this one");
+                throw bad(shown, "a new or empty folder, or one branchsim wrote (the whole folder is replaced)",
+                        "other files in it: " + String.join(", ", foreign) + "; choose another folder or empty this one");
             }
         }
         Path existing = abs.getParent();
@@ -400,10 +399,10 @@ public final class OutputFolder implements AutoCloseable {
             existing = existing.getParent();
         }
         if (existing == null || !Files.isDirectory(existing)) {
-            throw bad(shown + ": expected a folder that can be created, found " + existing + ", which is not a folder");
+            throw bad(shown, "a folder that can be created", existing + ", which is not a folder");
         }
         if (!Files.isWritable(existing) || !canCreateFolderIn(existing)) {
-            throw bad(shown + ": expected a place where branchsim may write, found " + existing + " not writable");
+            throw bad(shown, "a place where branchsim may write", existing + " not writable");
         }
         return abs;
     }
@@ -451,7 +450,7 @@ public final class OutputFolder implements AutoCloseable {
         }
     }
 
-    private static BranchsimException bad(String message) {
-        return new BranchsimException(ErrorKey.BAD_ARGUMENT, message);
+    private static BranchsimException bad(String option, String expected, String found) {
+        return new BranchsimException(ErrorKey.OUTPUT_FOLDER_REFUSED, option, expected, found);
     }
 }

@@ -45,11 +45,11 @@ public final class SchemaCommand implements Callable<Integer> {
         Path target = out.toAbsolutePath().normalize();
         Path folder = target.getParent();
         if (Files.isDirectory(target)) {
-            throw OptionChecks.bad("--out: expected a file name, found the folder " + out);
+            throw new BranchsimException(ErrorKey.OUTPUT_FOLDER_REFUSED, "--out", "a file name", "the folder " + out);
         }
         if (folder == null || !Files.isDirectory(folder)) {
-            throw OptionChecks.bad("--out: expected a file in an existing folder, found " + out
-                    + " (no folder " + folder + ")");
+            throw new BranchsimException(ErrorKey.OUTPUT_FOLDER_REFUSED, "--out", "a file in an existing folder",
+                    out + " (no folder " + folder + ")");
         }
         Path temp = null;
         try {

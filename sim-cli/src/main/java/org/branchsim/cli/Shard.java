@@ -38,18 +38,18 @@ record Shard(int k, int n) {
     static Shard parse(String text) {
         Matcher m = K_OF_N.matcher(text);
         if (!m.matches()) {
-            throw OptionChecks.bad("--shard: expected K/N, this machine's shard K of N shards as whole numbers "
-                    + "(e.g. 2/4), found \"" + text + "\"");
+            throw OptionChecks.unreadable("--shard", "K/N, this machine's shard K of N shards as whole numbers "
+                    + "(e.g. 2/4)", "\"" + text + "\"");
         }
         int k = Integer.parseInt(m.group(1));
         int n = Integer.parseInt(m.group(2));
         if (n < 1) {
-            throw OptionChecks.bad("--shard " + text.trim() + ": expected N (the number of shards) of at least 1, "
-                    + "found " + n);
+            throw OptionChecks.outOfRange("--shard " + text.trim(), "N (the number of shards) of at least 1",
+                    String.valueOf(n));
         }
         if (k < 1 || k > n) {
-            throw OptionChecks.bad("--shard " + text.trim() + ": expected K (this shard) from 1 to N = " + n
-                    + ", found " + k);
+            throw OptionChecks.outOfRange("--shard " + text.trim(), "K (this shard) from 1 to N = " + n,
+                    String.valueOf(k));
         }
         return new Shard(k, n);
     }
@@ -62,8 +62,8 @@ record Shard(int k, int n) {
      */
     Shard requireAtMost(int variants) {
         if (n > variants) {
-            throw OptionChecks.bad("--shard " + this + ": expected N (the number of shards) at most the number of "
-                    + "variants, " + variants + ", found " + n);
+            throw OptionChecks.outOfRange("--shard " + this, "N (the number of shards) at most the number of "
+                    + "variants, " + variants, String.valueOf(n));
         }
         return this;
     }

@@ -109,7 +109,7 @@ final class ShardJson {
      */
     BranchsimException bad(String where, String expected, String found) {
         String shown = found.length() > 80 ? found.substring(0, 77) + "..." : found;
-        return new BranchsimException(ErrorKey.BAD_ARGUMENT, "SHARD_FOLDER " + file + ", " + where
-                + ": expected " + expected + " (as written by sweep or tolerance --shard), found " + shown);
+        return new BranchsimException(ErrorKey.SHARD_FOLDER_REFUSED, file + ", " + where,
+                expected + " (as written by sweep or tolerance --shard)", shown);
     }
 }

@@ -10,6 +10,8 @@ import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.analysis.SignalStatistics;
 import org.branchsim.core.elements.ReducingValve;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.Element;
 import org.branchsim.core.model.Node;
@@ -131,6 +133,15 @@ final class StudyTable {
         return cols;
     }
 
+    /** @throws BranchsimException STUDY_FAILED (exit code 1) when no variant ran */
+    static void requireOneSuccess(List<StudyTable.Row> rows) {
+        if (!rows.isEmpty() && rows.stream().noneMatch(StudyTable.Row::ok)) {
+            StudyTable.Row first = rows.get(0);
+            throw new BranchsimException(ErrorKey.STUDY_FAILED, String.valueOf(rows.size()),
+                    String.valueOf(first.variant().index()), first.error());
+        }
+    }
+
     /**
      * Finds the metric a user names: the column name with or without its unit, in any case.
      *
@@ -138,7 +149,7 @@ final class StudyTable {
      * @param asked what the user wrote
      * @param columns the columns
      * @return the column
-     * @throws org.branchsim.core.error.BranchsimException BAD_ARGUMENT listing the valid names
+     * @throws BranchsimException UNKNOWN_METRIC listing the valid names
      */
     static String resolve(String option, String asked, List<String> columns) {
         String key = withoutUnit(asked);
@@ -147,8 +158,8 @@ final class StudyTable {
         if (hits.size() == 1) {
             return hits.get(0);
         }
-        throw OptionChecks.bad(option + ": expected a metric of summary.csv (unit optional, any case): "
-                + String.join(", ", columns) + "; found \"" + asked + "\"");
+        throw new BranchsimException(ErrorKey.UNKNOWN_METRIC, option,
+                String.join(", ", columns), asked);
     }
 
     private static String withoutUnit(String column) {

@@ -97,9 +97,8 @@ public final class SweepCommand implements Callable<Integer> {
                             .map(s -> new Trace.Column(s, base.circuit().signal(s).dimension())).toList());
             List<Variant> toRun = part == null ? variants : part.select(variants);
             PrintWriter err = spec.commandLine().getErr();
-            long start = System.nanoTime();
             List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), toRun, n,
-                    done -> progress(err, done, toRun.size(), start), o -> StudyTable.Row.of(o, base.units(), overlay));
+                    new VariantProgress(err, toRun.size())::done, o -> StudyTable.Row.of(o, base.units(), overlay));
             err.println();
             PrintWriter w = spec.commandLine().getOut();
             if (part == null) {
@@ -124,12 +123,12 @@ public final class SweepCommand implements Callable<Integer> {
         for (String v : vary) {
             int eq = v.indexOf('=');
             if (eq <= 0) {
-                throw OptionChecks.bad("--vary: expected PATH=VALUES, e.g. \"elements.reducer.dampingOrifice.diameter="
-                        + "0.5 mm..1 mm:6\", found \"" + v + "\"");
+                throw OptionChecks.unreadable("--vary", "PATH=VALUES, e.g. \"elements.reducer.dampingOrifice.diameter="
+                        + "0.5 mm..1 mm:6\"", "\"" + v + "\"");
             }
             String path = v.substring(0, eq).trim();
             if (axes.containsKey(path)) {
-                throw OptionChecks.bad("--vary: expected each parameter once, found " + path + " twice");
+                throw OptionChecks.repeated("--vary", "parameter", path + " twice");
             }
             String valuesText = v.substring(eq + 1).trim();
             List<Object> values = values(valuesText, path, dimensionAt(base, path));
@@ -137,20 +136,12 @@ public final class SweepCommand implements Callable<Integer> {
             axes.put(path, values);
             size *= values.size();
             if (size > OptionChecks.MAX_VARIANTS) {
-                throw OptionChecks.bad("--vary: expected a grid of at most " + OptionChecks.MAX_VARIANTS
-                        + " variants, found more (" + axes.values().stream().map(l -> Integer.toString(l.size()))
+                throw OptionChecks.outOfRange("--vary", "a grid of at most " + OptionChecks.MAX_VARIANTS + " variants",
+                        "more (" + axes.values().stream().map(l -> Integer.toString(l.size()))
                         .collect(java.util.stream.Collectors.joining(" x ")) + " so far)");
             }
         }
         return axes;
-    }
-
-    /** @throws BranchsimException STUDY_FAILED (exit code 1) when no variant ran */
-    static void requireOneSuccess(List<StudyTable.Row> rows) {
-        if (!rows.isEmpty() && rows.stream().noneMatch(StudyTable.Row::ok)) {
-            StudyTable.Row first = rows.get(0);
-            throw new BranchsimException(ErrorKey.STUDY_FAILED, rows.size(), first.variant().index(), first.error());
-        }
     }
 
     /** @return the signals to overlay: those asked for (checked), else the first reducing valve's outlet or node */
@@ -158,12 +149,12 @@ public final class SweepCommand implements Callable<Integer> {
         if (signals != null && !signals.isEmpty()) {
             for (String signal : signals) {
                 if (base.circuit().signal(signal) == null) {
-                    throw OptionChecks.bad("--signals: expected signals of this circuit such as "
-                            + base.circuit().signals().get(0).name() + ", found \"" + signal + "\"");
+                    throw new BranchsimException(ErrorKey.UNKNOWN_SIGNAL, "--signals",
+                            base.circuit().signals().get(0).name(), signal);
                 }
             }
             if (signals.stream().distinct().count() < signals.size()) {
-                throw OptionChecks.bad("--signals: expected each signal once, found " + String.join(",", signals));
+                throw OptionChecks.repeated("--signals", "signal", String.join(",", signals));
             }
             return signals;
         }
@@ -178,12 +169,11 @@ public final class SweepCommand implements Callable<Integer> {
         try {
             at = ParameterPath.parse(path).find(base.document());
         } catch (BranchsimException e) {
-            throw OptionChecks.bad("--vary: " + e.getMessage());
+            throw e.within("--vary");
         }
         Dimension d = at instanceof Located.Scalar sc ? ValueText.dimensionOf(sc.value()) : null;
         if (d == null) {
-            throw OptionChecks.bad("--vary " + path + ": expected the path of a number or of a value with its unit, "
-                    + "found " + at.describe());
+            throw new BranchsimException(ErrorKey.PARAMETER_NOT_NUMERIC, "--vary " + path, at.describe());
         }
         return d;
     }
@@ -201,12 +191,11 @@ public final class SweepCommand implements Callable<Integer> {
         if (m.matches()) {
             String countText = m.group(3);
             if (!countText.matches("\\d+")) {
-                throw OptionChecks.bad(option + ": expected a whole count after ':' (from..to:count), found \""
-                        + countText + "\"");
+                throw OptionChecks.unreadable(option, "a whole count after ':' (from..to:count)", "\"" + countText + "\"");
             }
             if (countText.length() > 9) {
-                throw OptionChecks.bad(option + " (count after ':'): expected a whole number from 2 to "
-                        + OptionChecks.MAX_VARIANTS + ", found " + countText);
+                throw OptionChecks.outOfRange(option + " (count after ':')", "a whole number from 2 to "
+                        + OptionChecks.MAX_VARIANTS, countText);
             }
             long count = OptionChecks.count(option + " (count after ':')", Long.parseLong(countText), 2,
                     OptionChecks.MAX_VARIANTS);
@@ -224,8 +213,8 @@ public final class SweepCommand implements Callable<Integer> {
             return out;
         }
         if (spec.contains("..")) {
-            throw OptionChecks.bad(option + ": expected a range with a count, from..to:count such as \"0.5 mm..1 mm:6\", "
-                    + "found \"" + spec + "\"");
+            throw OptionChecks.unreadable(option, "a range with a count, from..to:count such as \"0.5 mm..1 mm:6\"",
+                    "\"" + spec + "\"");
         }
         for (String part : spec.split(",")) {
             if (!part.isBlank()) {
@@ -234,7 +223,7 @@ public final class SweepCommand implements Callable<Integer> {
             }
         }
         if (out.isEmpty()) {
-            throw OptionChecks.bad(option + ": expected one or more values, found \"" + spec + "\"");
+            throw OptionChecks.unreadable(option, "one or more values", "\"" + spec + "\"");
         }
         return out;
     }
@@ -242,8 +231,8 @@ public final class SweepCommand implements Callable<Integer> {
     private static Quantity.Parsed parseValue(String text, String option, Dimension dimension) {
         Quantity.Parsed p = Quantity.parse(text.trim(), dimension);
         if (!p.ok()) {
-            throw OptionChecks.bad(option + ": expected " + p.error() + " (the field is a " + dimension.humanName()
-                    + "), found \"" + text.trim() + "\"");
+            throw OptionChecks.unreadable(option, p.error() + " (the field is a " + dimension.humanName() + ")",
+                    "\"" + text.trim() + "\"");
         }
         return p;
     }
@@ -268,8 +257,7 @@ public final class SweepCommand implements Callable<Integer> {
             } catch (BranchsimException e) {
                 String why = e.problems().isEmpty() ? e.getMessage()
                         : e.problems().get(0).path() + ": expected " + e.problems().get(0).expected();
-                throw OptionChecks.bad("--vary " + path + ": expected values the scenario accepts (" + why + "), found \""
-                        + value + "\"");
+                throw new BranchsimException(ErrorKey.PARAMETER_VALUE_REFUSED, "--vary " + path, why, String.valueOf(value));
             }
         }
     }
@@ -296,27 +284,4 @@ public final class SweepCommand implements Callable<Integer> {
         return out;
     }
 
-    static void progress(PrintWriter err, int done, int total, long start) {
-        double elapsed = (System.nanoTime() - start) * 1e-9;
-        double left = done == 0 ? Double.NaN : elapsed / done * (total - done);
-        boolean console = System.console() != null;
-        int step = Math.max(1, total / 10);
-        if (!console && total > 0 && done % step != 0 && done != total) {
-            return; // a log file gets a line every tenth of the work, a terminal a live line
-        }
-        synchronized (err) {
-            if (!console) {
-                err.printf(Locale.ROOT, total > 0 ? "variants %d/%d done, about %.0f s left%n" : "variants %d done%n",
-                        done, total, left);
-                err.flush();
-                return;
-            }
-            if (total > 0) {
-                err.printf(Locale.ROOT, "\rvariants %d/%d done, about %.0f s left   ", done, total, left);
-            } else {
-                err.printf(Locale.ROOT, "\rvariants %d done, %.0f s so far   ", done, elapsed);
-            }
-            err.flush();
-        }
-    }
 }

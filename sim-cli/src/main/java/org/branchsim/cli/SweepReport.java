@@ -30,7 +30,7 @@ final class SweepReport {
      */
     static void write(SweepDefinition study, List<StudyTable.Row> rows, OutputFolder folder, PrintWriter out) {
         printRanked(rows, study.rankBy(), study.descending(), out);
-        SweepCommand.requireOneSuccess(rows);
+        StudyTable.requireOneSuccess(rows);
         List<String> cols = StudyTable.columns(rows);
         folder.writeText("summary.csv", StudyTable.csv(study.parameters(), rows, cols));
         writeOverlays(study, rows, folder);

@@ -108,7 +108,7 @@ public final class TimingCommand implements Callable<Integer> {
             try {
                 methodList.add(Method.valueOf(m.trim().toUpperCase(Locale.ROOT)));
             } catch (IllegalArgumentException e) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--methods: expected implicit, explicit or reference, found \"" + m + "\"");
+                throw OptionChecks.unreadable("--methods", "implicit, explicit or reference", "\"" + m + "\"");
             }
         }
         Double end = endTime == null ? null : parseTime(endTime);
@@ -222,36 +222,34 @@ public final class TimingCommand implements Callable<Integer> {
         String grid = SolverSettings.outputGridProblem(end, base.solver().outputInterval(),
                 base.circuit().signals().size());
         if (grid != null) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--end-time for " + base.file() + ": expected " + grid
-                    + ", found " + SolverSettings.outputGrid(end, base.solver().outputInterval(),
-                    base.circuit().signals().size()));
+            throw OptionChecks.outOfRange("--end-time for " + base.file(), grid, SolverSettings.outputGrid(end,
+                    base.solver().outputInterval(), base.circuit().signals().size()));
         }
         return base.solver().withEndTime(end);
     }
 
     /**
      * @return the value the sweep benchmark varies, from the first scenario
-     * @throws BranchsimException BAD_ARGUMENT naming --sweep-parameter when the path names no number there
+     * @throws BranchsimException UNKNOWN_PARAMETER_PATH, PARAMETER_PATH_MALFORMED or PARAMETER_NOT_NUMERIC naming
+     *         --sweep-parameter when the path names no number there
      */
     private Object sweepValue(Scenario base) {
-        Object current;
+        Located at;
         try {
-            Located at = ParameterPath.parse(sweepParameter).find(base.document());
-            current = at instanceof Located.Scalar sc ? sc.value() : null;
+            at = ParameterPath.parse(sweepParameter).find(base.document());
         } catch (BranchsimException e) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--sweep-parameter: expected a parameter of "
-                    + base.file() + " (or --sweep-variants 0), found: " + e.getMessage());
+            throw e.within("--sweep-parameter for " + base.file() + " (or --sweep-variants 0)");
         }
+        Object current = at instanceof Located.Scalar sc ? sc.value() : null;
         if (ValueText.dimensionOf(current) == null) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--sweep-parameter " + sweepParameter
-                    + ": expected the path of a number or of a value with its unit, found " + current);
+            throw new BranchsimException(ErrorKey.PARAMETER_NOT_NUMERIC, "--sweep-parameter " + sweepParameter,
+                    at.describe());
         }
         return current;
     }
 
     /** @return the demos beside the program or in ./scenarios */
     static List<Path> defaultDemos() {
-        List<Path> looked = new ArrayList<>();
         List<Path> candidates = new ArrayList<>();
         candidates.add(Path.of("scenarios"));
         try {
@@ -265,6 +263,16 @@ public final class TimingCommand implements Callable<Integer> {
         } catch (java.net.URISyntaxException | IllegalArgumentException | SecurityException e) {
             // the program's own place is unknown: only ./scenarios is searched
         }
+        return defaultDemosIn(candidates);
+    }
+
+    /**
+     * @param candidates folders to look in, in order
+     * @return the default demos from the first folder that holds them all
+     * @throws BranchsimException DEMOS_NOT_FOUND naming the folders looked in
+     */
+    static List<Path> defaultDemosIn(List<Path> candidates) {
+        List<Path> looked = new ArrayList<>();
         for (Path dir : candidates) {
             looked.add(dir.toAbsolutePath().normalize());
             List<Path> demos = DEFAULT_DEMOS.stream().map(dir::resolve).toList();
@@ -272,10 +280,8 @@ public final class TimingCommand implements Callable<Integer> {
                 return demos;
             }
         }
-        throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "timing: expected the default demos ("
-                + String.join(", ", DEFAULT_DEMOS) + ") in ./scenarios or beside the program, found none in "
-                + looked.stream().distinct().map(Path::toString).collect(java.util.stream.Collectors.joining(", "))
-                + "; pass scenario files: branchsim timing SCENARIO...");
+        throw new BranchsimException(ErrorKey.DEMOS_NOT_FOUND, String.join(", ", DEFAULT_DEMOS),
+                looked.stream().distinct().map(Path::toString).collect(java.util.stream.Collectors.joining(", ")));
     }
 
     private ObjectNode sweep(Path file, Double end, int n, PrintWriter w) {
@@ -312,8 +318,7 @@ public final class TimingCommand implements Callable<Integer> {
         Quantity.Parsed p = Quantity.parse(text, Dimension.TIME);
         FieldBounds.Range bounds = FieldBounds.of("endTime", Dimension.TIME);
         if (!p.ok() || p.si() <= 0 || !bounds.allows(p.si())) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "--end-time: expected " + bounds.expected()
-                    + " such as \"10 s\", found \"" + text + "\"");
+            throw OptionChecks.outOfRange("--end-time", bounds.expected() + " such as \"10 s\"", "\"" + text + "\"");
         }
         return p.si();
     }

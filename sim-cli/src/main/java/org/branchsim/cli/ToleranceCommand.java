@@ -63,10 +63,8 @@ public final class ToleranceCommand implements Callable<Integer> {
         try (OutputFolder folder = new OutputFolder(target, scenario.file())) {
             List<ToleranceStudy.Parameter> params = ToleranceStudy.parameters(base.document());
             if (params.isEmpty()) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, base.file() + ":" + base.document().line() + ":"
-                        + base.document().column() + ": no value is written with a tolerance; "
-                        + "write e.g. \"diameter\": \"0.8 mm \u00b1 0.02 mm\", \"springRate\": \"15 N/mm \u00b1 10 %\" or "
-                        + "\"bulkModulus\": \"1.2 GPa .. 1.6 GPa\"");
+                throw new BranchsimException(ErrorKey.NO_TOLERANCED_VALUE, base.file() + ":" + base.document().line() + ":"
+                        + base.document().column());
             }
             List<String> predicted = StudyTable.columnsOf(base);
             String metric = histogram != null ? StudyTable.resolve("--histogram", histogram, predicted)
@@ -77,10 +75,8 @@ public final class ToleranceCommand implements Callable<Integer> {
             List<Variant> variants = ToleranceStudy.draw(params, runs, seed);
             List<Variant> toRun = part == null ? variants : part.select(variants);
             PrintWriter err = spec.commandLine().getErr();
-            long start = System.nanoTime();
             List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), toRun, n,
-                    d -> SweepCommand.progress(err, d, toRun.size(), start),
-                    o -> StudyTable.Row.of(o, base.units(), List.of()));
+                    new VariantProgress(err, toRun.size())::done, o -> StudyTable.Row.of(o, base.units(), List.of()));
             err.println();
             PrintWriter w = spec.commandLine().getOut();
             if (part == null) {

@@ -30,7 +30,7 @@ final class ToleranceReport {
      * @throws org.branchsim.core.error.BranchsimException STUDY_FAILED (exit code 1) when no run succeeded
      */
     static void write(ToleranceDefinition study, List<StudyTable.Row> rows, OutputFolder folder, PrintWriter w) {
-        SweepCommand.requireOneSuccess(rows);
+        StudyTable.requireOneSuccess(rows);
         List<String> cols = StudyTable.columns(rows);
         List<ToleranceStudy.Statistics> stats = new ArrayList<>();
         for (String c : cols) {

@@ -73,7 +73,7 @@ class OutputFolderTest {
         Path mine = Files.createDirectories(dir.resolve("mine"));
         Files.writeString(mine.resolve("notes.txt"), "keep");
         BranchsimException e = assertThrows(BranchsimException.class, () -> new OutputFolder(mine));
-        assertEquals(ErrorKey.BAD_ARGUMENT, e.key());
+        assertEquals(ErrorKey.OUTPUT_FOLDER_REFUSED, e.key());
         assertTrue(e.getMessage().startsWith("--out"), e.getMessage());
         // a folder written before the marker existed: only files named like branchsim outputs
         Path legacy = Files.createDirectories(dir.resolve("legacy"));

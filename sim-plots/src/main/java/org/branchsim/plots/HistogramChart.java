@@ -14,7 +14,10 @@ import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.data.statistics.HistogramDataset;
 
-/** Draws the distribution of one metric over the runs of a tolerance study as a PNG histogram. */
+/**
+ * Draws the distribution of one metric over the runs of a tolerance study as a PNG histogram: equal bins from the
+ * smallest to the largest value (in the metric's own unit), the number of runs in each.
+ */
 public final class HistogramChart {
 
     private HistogramChart() {
@@ -29,6 +32,12 @@ public final class HistogramChart {
      * @throws IOException when the file cannot be written
      */
     public static void save(double[] values, int bins, String title, String axisLabel, Path file) throws IOException {
+        ChartUtils.saveChartAsPNG(file.toFile(), chart(values, bins, title, axisLabel), TraceCharts.WIDTH,
+                TraceCharts.PANEL_HEIGHT + 120);
+    }
+
+    /** @return the chart {@link #save} draws, with its caution, before it is saved */
+    static JFreeChart chart(double[] values, int bins, String title, String axisLabel) {
         if (values.length == 0 || bins < 1) {
             throw new IllegalArgumentException("a histogram needs values and at least one bin");
         }
@@ -58,6 +67,6 @@ public final class HistogramChart {
         TextTitle note = new TextTitle(TraceCharts.CAUTION);
         note.setPosition(RectangleEdge.BOTTOM);
         chart.addSubtitle(note);
-        ChartUtils.saveChartAsPNG(file.toFile(), chart, TraceCharts.WIDTH, TraceCharts.PANEL_HEIGHT + 120);
+        return chart;
     }
 }

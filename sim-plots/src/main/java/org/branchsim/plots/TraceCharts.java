@@ -68,11 +68,15 @@ public final class TraceCharts {
      */
     public static void overlay(Trace trace, List<String> signals, String title, UnitSystem units, Path file)
             throws IOException {
+        save(overlayChart(trace, signals, title, units), file, PANEL_HEIGHT + 120);
+    }
+
+    /** @return the chart {@link #overlay} draws, with its caution, before it is saved */
+    static JFreeChart overlayChart(Trace trace, List<String> signals, String title, UnitSystem units) {
         requireSignals(trace, signals);
         Dimension d = trace.columns().get(trace.indexOf(signals.get(0))).dimension();
         XYPlot plot = panel(trace, signals, units, axisLabel(signals.size() == 1 ? signals.get(0) : null, d, units));
-        JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true);
-        save(chart, file, PANEL_HEIGHT + 120);
+        return withCaution(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true));
     }
 
     /**
@@ -87,6 +91,11 @@ public final class TraceCharts {
      */
     public static void stacked(Trace trace, List<String> signals, String title, UnitSystem units, Path file)
             throws IOException {
+        save(stackedChart(trace, signals, title, units), file, Math.max(PANEL_HEIGHT, 60 + 190 * signals.size()));
+    }
+
+    /** @return the chart {@link #stacked} draws, with its caution, before it is saved */
+    static JFreeChart stackedChart(Trace trace, List<String> signals, String title, UnitSystem units) {
         requireSignals(trace, signals);
         CombinedDomainXYPlot combined = new CombinedDomainXYPlot(timeAxis());
         combined.setGap(8.0);
@@ -97,9 +106,7 @@ public final class TraceCharts {
             p.getRenderer().setSeriesPaint(0, PALETTE[k++ % PALETTE.length]);
             combined.add(p, 1);
         }
-        JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, combined, false);
-        int height = Math.max(PANEL_HEIGHT, 60 + 190 * signals.size());
-        save(chart, file, height);
+        return withCaution(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, combined, false));
     }
 
     private static void requireSignals(Trace trace, List<String> signals) {
@@ -152,12 +159,17 @@ public final class TraceCharts {
         return plot;
     }
 
-    private static void save(JFreeChart chart, Path file, int height) throws IOException {
+    /** Adds the white background and the caution footnote every figure carries. */
+    private static JFreeChart withCaution(JFreeChart chart) {
         chart.setBackgroundPaint(Color.WHITE);
         TextTitle note = new TextTitle(CAUTION, new Font(Font.SANS_SERIF, Font.ITALIC, 11));
         note.setPosition(RectangleEdge.BOTTOM);
         note.setPaint(new Color(0x555555));
         chart.addSubtitle(note);
+        return chart;
+    }
+
+    private static void save(JFreeChart chart, Path file, int height) throws IOException {
         ChartUtils.saveChartAsPNG(file.toFile(), chart, WIDTH, height);
     }
 
@@ -194,6 +206,12 @@ public final class TraceCharts {
      */
     public static void compare(List<Labelled> runs, String signal, String title, UnitSystem units, Path file,
                                double from, double to) throws IOException {
+        save(compareChart(runs, signal, title, units, from, to), file, PANEL_HEIGHT + 160);
+    }
+
+    /** @return the chart {@link #compare} draws, with its caution, before it is saved */
+    static JFreeChart compareChart(List<Labelled> runs, String signal, String title, UnitSystem units, double from,
+                                   double to) {
         if (runs.isEmpty()) {
             throw new IllegalArgumentException("no runs to compare");
         }
@@ -228,8 +246,7 @@ public final class TraceCharts {
         plot.setDomainGridlinePaint(new Color(0xd0d0d0));
         plot.setRangeGridlinePaint(new Color(0xd0d0d0));
         plot.setSeriesRenderingOrder(SeriesRenderingOrder.FORWARD);
-        JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, runs.size() <= 16);
-        save(chart, file, PANEL_HEIGHT + 160);
+        return withCaution(new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, runs.size() <= 16));
     }
 
     /** @return the names of a trace's signals of one dimension that are not zero throughout, in trace order */

@@ -128,8 +128,8 @@ public final class OscillationDetector {
     public static List<SignalOscillation> components(double[] t, SignalSamples signal, double from, double to) {
         double[] x = signal.samples();
         if (x.length != t.length) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "signal " + signal.name() + " has " + x.length
-                    + " samples but there are " + t.length + " sample times");
+            throw new BranchsimException(ErrorKey.SAMPLE_COUNT_MISMATCH, signal.name(), String.valueOf(x.length),
+                    String.valueOf(t.length));
         }
         int i0 = 0;
         while (i0 < t.length && t[i0] < from) {
@@ -153,8 +153,8 @@ public final class OscillationDetector {
             tt[k] = t[i0 + k];
             r[k] = x[i0 + k];
             if (k > 0 && Math.abs(tt[k] - tt[k - 1] - h) > UNIFORMITY * h) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "oscillation detection needs uniform sample times;"
-                        + " interval " + (tt[k] - tt[k - 1]) + " s at t = " + tt[k] + " s differs from " + h + " s");
+                throw new BranchsimException(ErrorKey.NON_UNIFORM_SAMPLES, String.valueOf(tt[k] - tt[k - 1]),
+                        String.valueOf(tt[k]), String.valueOf(h));
             }
         }
         WelchSpectrum.removeLine(r);

@@ -22,8 +22,8 @@ public record SignalSamples(String name, Dimension dimension, double[] samples, 
         Objects.requireNonNull(dimension, "dimension");
         Objects.requireNonNull(samples, "samples");
         if (!(threshold > 0.0) || Double.isInfinite(threshold)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT,
-                    "the oscillation threshold of signal " + name + " must be positive and finite, not " + threshold);
+            throw new BranchsimException(ErrorKey.VALUE_NOT_FINITE,
+                    "oscillation threshold of signal " + name, String.valueOf(threshold));
         }
     }
 }

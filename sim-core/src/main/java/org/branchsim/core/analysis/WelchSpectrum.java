@@ -49,9 +49,8 @@ public final class WelchSpectrum {
      */
     public static WelchSpectrum estimate(double[] x, double sampleInterval, int segmentLength, int padding) {
         if (segmentLength < 8 || segmentLength > x.length || padding < 1 || !(sampleInterval > 0)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "Welch spectrum needs 8 <= segment length <= "
-                    + x.length + " samples, padding >= 1 and a positive sample interval; got " + segmentLength
-                    + ", " + padding + ", " + sampleInterval + " s");
+            throw new BranchsimException(ErrorKey.SPECTRUM_SETTINGS_INVALID, String.valueOf(x.length),
+                    String.valueOf(segmentLength), String.valueOf(padding), String.valueOf(sampleInterval));
         }
         int fftLength = Integer.highestOneBit(Math.max(1, padding * segmentLength - 1)) << 1;
         int hop = segmentLength / 2;

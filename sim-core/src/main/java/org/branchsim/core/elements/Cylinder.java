@@ -93,21 +93,6 @@ public final class Cylinder implements Element {
         return load;
     }
 
-    /** @return cap-end piston area, m^2 */
-    public double capArea() {
-        return a1;
-    }
-
-    /** @return rod-end annulus area, m^2 */
-    public double rodArea() {
-        return a2;
-    }
-
-    /** @return the piston (for diagnostics) */
-    public TravelLimitedMass piston() {
-        return piston;
-    }
-
     @Override
     public String id() {
         return id;

@@ -22,7 +22,7 @@ public record MeteringEdge(double spoolDiameter, double width, double openLength
 
     /** @return spool end area, m^2 */
     public double endArea() {
-        return 0.25 * Math.PI * spoolDiameter * spoolDiameter;
+        return OrificeLaw.circleArea(spoolDiameter);
     }
 
     /** @return edge opening s for spool travel y, m (negative when the edge overlaps) */

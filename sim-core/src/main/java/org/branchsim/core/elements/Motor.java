@@ -54,7 +54,7 @@ public final class Motor implements Element {
         this.loadTorque = new ScheduledInput(id + ".loadTorque", Dimension.TORQUE, initialLoadTorque);
     }
 
-    /** @return the load torque schedule, N*m */
+    /** @return the load torque schedule, N*m (the scenario reader schedules it) */
     public ScheduledInput loadTorque() {
         return loadTorque;
     }

@@ -2,6 +2,7 @@ package org.branchsim.core.elements;
 
 import java.util.List;
 import org.branchsim.core.fluid.Fluid;
+import org.branchsim.core.laws.Compressibility;
 import org.branchsim.core.laws.OrificeLaw;
 import org.branchsim.core.model.Binder;
 import org.branchsim.core.model.Element;
@@ -157,26 +158,6 @@ public final class PilotReducingValve implements Element, ReducingValve {
         return setting;
     }
 
-    /** @return the main stage */
-    public MainStage main() {
-        return main;
-    }
-
-    /** @return the pilot poppet */
-    public PoppetGeometry pilotPoppet() {
-        return pilot;
-    }
-
-    /** @return the main spool member (for diagnostics) */
-    public TravelLimitedMass spool() {
-        return spool;
-    }
-
-    /** @return the pilot poppet member (for diagnostics) */
-    public TravelLimitedMass poppet() {
-        return poppet;
-    }
-
     @Override
     public String id() {
         return id;
@@ -269,7 +250,7 @@ public final class PilotReducingValve implements Element, ReducingValve {
         e.inflow(drain, qp + ap * xdot);
         double chamberInflow = qo - qp + as * ydot - ap * xdot;
         double vc = chamberVolume - as * y;
-        e.derivative(chamber, fluid.effectiveBulkModulus(pc, Double.POSITIVE_INFINITY) / vc * chamberInflow);
+        e.derivative(chamber, Compressibility.pressureRate(fluid.effectiveBulkModulus(pc, Double.POSITIVE_INFINITY), vc, chamberInflow));
         spool.apply(e, spoolForces(e));
         poppet.apply(e, poppetForces(e));
         if (e.recording()) {

@@ -5,11 +5,11 @@ import org.branchsim.core.laws.OrificeLaw;
 import org.branchsim.core.laws.PoppetSeat;
 
 /**
- * A spring-loaded poppet on a seat: seat diameter, cone angle, spring, mass, damping, travel, Cd, and the
- * flow and force laws that follow from them ({@link PoppetSeat} area, {@link OrificeLaw} flow,
- * {@link FlowForce} with the jet leaving at half the cone angle). Shared by the direct-acting relief valve
- * and the pilot stage of the pilot-operated reducing valve. The cone's trigonometry is computed once, since
- * the laws are evaluated at every derivative evaluation.
+ * A spring-loaded poppet on a seat: seat diameter (m), cone angle (rad), spring (N/m, N), mass (kg), damping
+ * (N*s/m), travel (m), Cd, and the flow and force laws that follow from them: the seat's areas from
+ * {@link PoppetSeat}, the flow from {@link OrificeLaw}, the closing flow force from {@link FlowForce} with the jet
+ * leaving at half the cone angle. Shared by the direct-acting relief valve and the pilot stage of the
+ * pilot-operated reducing valve.
  */
 public final class PoppetGeometry {
     private final double seatDiameter;
@@ -20,11 +20,7 @@ public final class PoppetGeometry {
     private final double damping;
     private final double maxLift;
     private final double cd;
-    private final boolean flat;
-    private final double sinHalf;
-    private final double sinFull;
-    private final double usefulLift;
-    private final double jetCosine;
+    private final PoppetSeat seat;
 
     /**
      * @param seatDiameter seat diameter, m
@@ -46,21 +42,12 @@ public final class PoppetGeometry {
         this.damping = damping;
         this.maxLift = maxLift;
         this.cd = cd;
-        this.flat = coneAngle >= Math.PI - 1e-9;
-        this.sinHalf = Math.sin(0.5 * Math.min(coneAngle, Math.PI));
-        this.sinFull = Math.sin(coneAngle);
-        this.usefulLift = PoppetSeat.usefulLift(seatDiameter, coneAngle);
-        this.jetCosine = Math.cos(Math.min(coneAngle, Math.PI) / 2.0);
+        this.seat = new PoppetSeat(seatDiameter, coneAngle);
     }
 
     /** @return seat diameter, m */
     public double seatDiameter() {
         return seatDiameter;
-    }
-
-    /** @return full cone angle, rad */
-    public double coneAngle() {
-        return coneAngle;
     }
 
     /** @return spring rate, N/m */
@@ -88,23 +75,14 @@ public final class PoppetGeometry {
         return maxLift;
     }
 
-    /** @return discharge coefficient */
-    public double cd() {
-        return cd;
-    }
-
     /** @return seat area the pressure acts on, m^2 */
     public double seatArea() {
-        return PoppetSeat.seatArea(seatDiameter);
+        return seat.seatArea();
     }
 
-    /** @return flow area at a lift, m^2 (the {@link PoppetSeat} formula, limited to its useful lift) */
+    /** @return flow area at a lift, m^2 ({@link PoppetSeat#area}) */
     public double area(double lift) {
-        double x = Math.max(0.0, Math.min(lift, usefulLift));
-        if (flat) {
-            return Math.PI * seatDiameter * x;
-        }
-        return Math.PI * seatDiameter * x * sinHalf * (1.0 - x * sinFull / (2.0 * seatDiameter));
+        return seat.area(lift);
     }
 
     /**
@@ -119,13 +97,13 @@ public final class PoppetGeometry {
         if (a <= 0.0) {
             return 0.0;
         }
-        double dh = 2.0 * sinHalf * Math.max(lift, 1e-9);
+        double dh = seat.gapHydraulicDiameter(lift);
         return OrificeLaw.flow(cd, a, dp, density, OrificeLaw.transitionPressure(cd, dh, density, nu));
     }
 
     /** @return steady flow force closing the poppet, N; the jet leaves at half the cone angle to the axis */
     public double flowForce(double lift, double dp) {
-        return 2.0 * cd * FlowForce.VELOCITY_COEFFICIENT * area(lift) * Math.abs(dp) * jetCosine;
+        return FlowForce.closingForce(cd, FlowForce.VELOCITY_COEFFICIENT, area(lift), dp, seat.jetAngle());
     }
 
     /** @return a copy with a different preload, N */

@@ -43,7 +43,7 @@ public final class Pump implements Element {
         this.speed = new ScheduledInput(id + ".speed", Dimension.ROTATIONAL_SPEED, speed);
     }
 
-    /** @return the speed schedule, rad/s */
+    /** @return the speed schedule, rad/s (the scenario reader schedules it) */
     public ScheduledInput speed() {
         return speed;
     }

@@ -48,11 +48,6 @@ public final class ReliefValve implements Element {
         return poppet.preload() / poppet.seatArea();
     }
 
-    /** @return the poppet (for diagnostics) */
-    public TravelLimitedMass poppet() {
-        return member;
-    }
-
     @Override
     public String id() {
         return id;

@@ -1,6 +1,7 @@
 package org.branchsim.core.elements;
 
 import org.branchsim.core.fluid.Fluid;
+import org.branchsim.core.laws.Compressibility;
 import org.branchsim.core.laws.OrificeLaw;
 import org.branchsim.core.model.Binder;
 import org.branchsim.core.model.EnergyAccount;
@@ -73,7 +74,7 @@ public record SpoolEndChamber(double deadVolume, double orificeDiameter, double 
             e.inflow(outlet, -q);
             double inflow = q - endArea * velocity;
             double v = spec.deadVolume() + endArea * travel;
-            e.derivative(pressure, fluid.effectiveBulkModulus(pe, Double.POSITIVE_INFINITY) / v * inflow);
+            e.derivative(pressure, Compressibility.pressureRate(fluid.effectiveBulkModulus(pe, Double.POSITIVE_INFINITY), v, inflow));
             if (e.recording()) {
                 e.signal(pressureSignal, pe);
                 e.signal(flowSignal, q);

@@ -29,10 +29,26 @@ public final class BranchsimException extends RuntimeException {
      * @param arguments arguments of the key's pattern
      */
     public BranchsimException(ErrorKey key, List<Problem> problems, Throwable cause, Object... arguments) {
-        super(format(key, arguments), cause);
+        this(format(key, arguments), key, problems, cause, arguments);
+    }
+
+    private BranchsimException(String message, ErrorKey key, List<Problem> problems, Throwable cause,
+                               Object[] arguments) {
+        super(message, cause);
         this.key = key;
         this.arguments = arguments.clone();
         this.problems = List.copyOf(problems);
+    }
+
+    /**
+     * The same failure seen from where it was met, e.g. the option that carried a parameter path: same key,
+     * arguments and problems, the message prefixed by {@code context + ": "}.
+     *
+     * @param context where the failure was met, e.g. {@code --vary}
+     * @return the failure in that context (its cause is this exception)
+     */
+    public BranchsimException within(String context) {
+        return new BranchsimException(context + ": " + getMessage(), key, problems, this, arguments);
     }
 
     private static String format(ErrorKey key, Object[] arguments) {

@@ -65,16 +65,6 @@ public final class Fluid {
         return density * kinematicViscosity;
     }
 
-    /** @return bulk modulus of the air-free oil, Pa */
-    public double oilBulkModulus() {
-        return oilBulkModulus;
-    }
-
-    /** @return free-air volume fraction at atmospheric pressure */
-    public double airFraction() {
-        return airFraction;
-    }
-
     /** @return working temperature, K */
     public double temperature() {
         return temperature;

@@ -1,47 +1,71 @@
 package org.branchsim.core.laws;
 
 /**
- * Flow area of a poppet lifted from its seat. A conical poppet (full cone angle alpha) on a sharp seat of
- * diameter d opens the lateral area of a cone frustum: A = pi d x sin(alpha/2) (1 - x sin(alpha) / (2 d))
- * (geometry of the frustum surface; common textbook form). A flat (disc) seat opens A = pi d x, used up to
- * x = d/4 where it equals the seat bore area. The hydraulic force acts on the seat area pi d^2 / 4.
+ * Flow area of a poppet lifted from its seat, and the areas the seat's pressure acts on. A conical poppet (full
+ * cone angle alpha) on a sharp seat of diameter d opens the lateral area of a cone frustum:
+ * A = pi d x sin(alpha/2) (1 - x sin(alpha) / (2 d)) (geometry of the frustum surface; common textbook form),
+ * which grows up to the useful lift d / sin(alpha) and stays there beyond it. A flat (disc) seat opens
+ * A = pi d x up to x = d/4, where it equals the seat bore area. The hydraulic force acts on the seat area
+ * pi d^2 / 4. The jet leaves at half the cone angle to the axis (used by {@link FlowForce}). Lengths in m,
+ * areas in m^2, angles in rad. The cone's trigonometry is computed once: the simulator evaluates these laws at
+ * every derivative evaluation.
  */
 public final class PoppetSeat {
 
-    private PoppetSeat() {
-    }
+    /** Cone angles from this close to pi on count as a flat seat, rad. */
+    private static final double FLAT_MARGIN = 1e-9;
+    /** Smallest lift used for the gap's hydraulic diameter, m (keeps the laminar transition finite when seated). */
+    private static final double MIN_GAP_LIFT = 1e-9;
+
+    private final double seatDiameter;
+    private final double coneAngle;
+    private final boolean flat;
+    private final double sinHalf;
+    private final double sinFull;
+    private final double usefulLift;
 
     /**
      * @param seatDiameter seat diameter d, m
      * @param coneAngle full cone angle alpha, rad (pi for a flat disc)
-     * @param lift poppet lift x, m (values below zero give zero)
+     */
+    public PoppetSeat(double seatDiameter, double coneAngle) {
+        this.seatDiameter = seatDiameter;
+        this.coneAngle = coneAngle;
+        this.flat = coneAngle >= Math.PI - FLAT_MARGIN;
+        this.sinHalf = Math.sin(0.5 * Math.min(coneAngle, Math.PI));
+        this.sinFull = Math.sin(coneAngle);
+        this.usefulLift = flat ? 0.25 * seatDiameter : seatDiameter / sinFull;
+    }
+
+    /** @return the lift at which the frustum area stops growing (d / sin(alpha), or d/4 for a flat seat), m */
+    public double usefulLift() {
+        return usefulLift;
+    }
+
+    /**
+     * @param lift poppet lift x, m (below zero counts as zero, beyond the useful lift as the useful lift)
      * @return flow area, m^2
      */
-    public static double area(double seatDiameter, double coneAngle, double lift) {
-        double x = Math.max(0.0, lift);
-        if (coneAngle >= Math.PI - 1e-9) {
-            return Math.PI * seatDiameter * Math.min(x, 0.25 * seatDiameter);
+    public double area(double lift) {
+        double x = Math.max(0.0, Math.min(lift, usefulLift));
+        if (flat) {
+            return Math.PI * seatDiameter * x;
         }
-        return Math.PI * seatDiameter * x * Math.sin(0.5 * coneAngle)
-                * (1.0 - x * Math.sin(coneAngle) / (2.0 * seatDiameter));
+        return Math.PI * seatDiameter * x * sinHalf * (1.0 - x * sinFull / (2.0 * seatDiameter));
     }
 
-    /** @return the lift at which the frustum area stops growing (or d/4 for a flat seat), m */
-    public static double usefulLift(double seatDiameter, double coneAngle) {
-        if (coneAngle >= Math.PI - 1e-9) {
-            return 0.25 * seatDiameter;
-        }
-        return seatDiameter / Math.sin(coneAngle);
-    }
-
-    /** @return the hydraulic diameter of the annular gap at small lift (twice the gap width), m */
-    public static double gapHydraulicDiameter(double coneAngle, double lift) {
-        double gap = Math.max(lift, 1e-9) * Math.sin(0.5 * Math.min(coneAngle, Math.PI));
-        return 2.0 * gap;
+    /** @return the hydraulic diameter of the annular gap, twice the gap width x sin(alpha/2), m */
+    public double gapHydraulicDiameter(double lift) {
+        return 2.0 * sinHalf * Math.max(lift, MIN_GAP_LIFT);
     }
 
     /** @return the seat area pi d^2 / 4 the pressure acts on, m^2 */
-    public static double seatArea(double seatDiameter) {
+    public double seatArea() {
         return 0.25 * Math.PI * seatDiameter * seatDiameter;
+    }
+
+    /** @return the angle of the jet leaving the seat to the poppet's axis, half the cone angle, rad */
+    public double jetAngle() {
+        return Math.min(coneAngle, Math.PI) / 2.0;
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import org.branchsim.core.fluid.Fluid;
+import org.branchsim.core.laws.Compressibility;
 
 /**
  * A hydraulic circuit ready to simulate, built once by {@link CircuitBuilder} and never changed afterwards:
@@ -223,7 +224,7 @@ public final class CircuitModel {
             }
             double v = n.volume() + e.extraVolumeOf(n);
             double beta = fluid.effectiveBulkModulus(p, n.wallBulkModulus());
-            e.derivative(n.pressureSlot(), beta / v * inflow);
+            e.derivative(n.pressureSlot(), Compressibility.pressureRate(beta, v, inflow));
             e.signal(n.pressureSignal(), p);
             e.power(compressionAccount, p * inflow);
         }

@@ -96,7 +96,7 @@ public final class FieldPaths {
                     where = type + " \"" + id + "\"";
                     here = item;
                     if (i == segments.size() - 1) {
-                        throw new IllegalArgumentException("\"" + seg + "." + id + "\" is a " + (nodes ? "node" : "element")
+                        throw new IllegalArgumentException("\"" + seg + "." + id + "\" is " + (nodes ? "a node" : "an element")
                                 + ", not a value; its fields: " + String.join(", ", block.names()));
                     }
                 }

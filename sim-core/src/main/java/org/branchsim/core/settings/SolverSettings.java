@@ -35,24 +35,21 @@ public record SolverSettings(Method method, double endTime, double outputInterva
      * Checks what every run needs: a method, a finite positive end time and output interval, and an output
      * grid within {@link #MAX_OUTPUT_SAMPLES}.
      *
-     * @throws BranchsimException BAD_ARGUMENT when a value cannot give a run
+     * @throws BranchsimException NO_INTEGRATION_METHOD, VALUE_NOT_FINITE or OUTPUT_GRID_TOO_LARGE when a value cannot give a run
      */
     public SolverSettings {
         if (method == null) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "solver settings need an integration method");
+            throw new BranchsimException(ErrorKey.NO_INTEGRATION_METHOD);
         }
         if (!(endTime > 0.0) || !Double.isFinite(endTime)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "expected a finite end time above zero, found "
-                    + endTime + " s");
+            throw new BranchsimException(ErrorKey.VALUE_NOT_FINITE, "end time", endTime + " s");
         }
         if (!(outputInterval > 0.0) || !Double.isFinite(outputInterval)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "expected a finite output interval above zero, found "
-                    + outputInterval + " s");
+            throw new BranchsimException(ErrorKey.VALUE_NOT_FINITE, "output interval", outputInterval + " s");
         }
         String grid = outputGridProblem(endTime, outputInterval, 0);
         if (grid != null) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "expected " + grid + ", found "
-                    + outputGrid(endTime, outputInterval, 0));
+            throw new BranchsimException(ErrorKey.OUTPUT_GRID_TOO_LARGE, grid, outputGrid(endTime, outputInterval, 0));
         }
     }
 

@@ -124,9 +124,8 @@ public final class OperatingPointSolver {
     private static Attempt run(CircuitModel circuit, double t, OperatingPointStart start) {
         double[] y = start.state();
         if (y.length != circuit.dimension() || !Double.isFinite(t)) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, String.format(Locale.ROOT,
-                    "an operating-point start needs %d states and a finite time, found %d states at t = %s",
-                    circuit.dimension(), y.length, t));
+            throw new BranchsimException(ErrorKey.START_STATE_MISMATCH, String.valueOf(circuit.dimension()),
+                    String.valueOf(y.length), String.valueOf(t));
         }
         RunEngine engine = new RunEngine(circuit);
         List<Member> members = circuit.members();

@@ -58,7 +58,7 @@ public record OperatingPointStart(double[] state, Map<String, Mode> held, Map<St
      * @param from start of the averaging window, s
      * @param to end of the averaging window, s
      * @return the start
-     * @throws BranchsimException BAD_ARGUMENT when the window holds no sample
+     * @throws BranchsimException NO_SAMPLES_IN_WINDOW when the window holds no sample
      */
     public static OperatingPointStart fromRun(SimulationResult result, double from, double to) {
         Trace trace = result.trace();
@@ -69,8 +69,8 @@ public record OperatingPointStart(double[] state, Map<String, Mode> held, Map<St
             }
         }
         if (rows.isEmpty()) {
-            throw new BranchsimException(ErrorKey.BAD_ARGUMENT, String.format(Locale.ROOT,
-                    "no output sample between %.6g s and %.6g s to average an operating-point start over", from, to));
+            throw new BranchsimException(ErrorKey.NO_SAMPLES_IN_WINDOW, String.format(Locale.ROOT, "%.6g", from),
+                    String.format(Locale.ROOT, "%.6g", to));
         }
         CircuitModel circuit = result.model();
         Map<StateSlot, Integer> positions = RunEngine.positions(circuit);

@@ -144,8 +144,8 @@ final class RunEngine {
         }
         for (String id : held.keySet()) {
             if (!byId.containsKey(id)) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT, "no member \"" + id + "\" in circuit "
-                        + model.name() + "; members: " + String.join(", ", byId.keySet()));
+                throw new BranchsimException(ErrorKey.UNKNOWN_MEMBER, id, model.name(),
+                        String.join(", ", byId.keySet()));
             }
         }
         for (int k = 0; k < modes.length; k++) {

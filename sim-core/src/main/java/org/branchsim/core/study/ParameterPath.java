@@ -28,16 +28,14 @@ public final class ParameterPath {
     /**
      * @param text dotted path
      * @return the path
-     * @throws BranchsimException BAD_ARGUMENT when the text is empty or has empty segments
+     * @throws BranchsimException PARAMETER_PATH_MALFORMED when the text is empty or has empty segments
      */
     public static ParameterPath parse(String text) {
         String[] parts = text.split("\\.", -1);
         List<String> segs = new ArrayList<>();
         for (String p : parts) {
             if (p.isBlank()) {
-                throw new BranchsimException(ErrorKey.BAD_ARGUMENT,
-                        "parameter path \"" + text + "\": expected names separated by single dots, e.g. "
-                                + "elements.reducer.dampingOrifice.diameter");
+                throw new BranchsimException(ErrorKey.PARAMETER_PATH_MALFORMED, text);
             }
             segs.add(p.trim());
         }
@@ -52,7 +50,7 @@ public final class ParameterPath {
     /**
      * @param root the scenario document
      * @return the declared field this path names, with the node or element it belongs to
-     * @throws BranchsimException BAD_ARGUMENT, located, when the path names no declared field
+     * @throws BranchsimException UNDECLARED_PARAMETER_FIELD, located, when the path names no declared field
      */
     public FieldPaths.Target target(Located root) {
         try {
@@ -65,7 +63,7 @@ public final class ParameterPath {
     /**
      * @param root the scenario document
      * @return the declaration of the field this path names (its dimension, bounds, remedy role)
-     * @throws BranchsimException BAD_ARGUMENT, located, when the path names no declared field
+     * @throws BranchsimException UNDECLARED_PARAMETER_FIELD, located, when the path names no declared field
      */
     public FieldSpec field(Located root) {
         return target(root).field();
@@ -172,10 +170,11 @@ public final class ParameterPath {
             }
             known = " (ids there: " + String.join(", ", ids) + ")";
         }
-        return refused("no \"" + segments.get(index) + "\" in the scenario" + known);
+        return new BranchsimException(ErrorKey.UNKNOWN_PARAMETER_PATH, text, segments.get(index), known);
     }
 
+    /** A path that does not name a declared field of the scenario's descriptors, with what is declared there. */
     private BranchsimException refused(String reason) {
-        return new BranchsimException(ErrorKey.BAD_ARGUMENT, "parameter path \"" + text + "\": " + reason);
+        return new BranchsimException(ErrorKey.UNDECLARED_PARAMETER_FIELD, text, reason);
     }
 }

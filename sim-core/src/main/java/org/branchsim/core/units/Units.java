@@ -6,7 +6,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.stream.Collectors;
 
 /**
  * The table of unit symbols branchsim accepts. Factors are exact where NIST SP 811 (2008), Appendix B,
@@ -275,14 +274,6 @@ public final class Units {
         String n = normalise(symbol);
         Unit exact = BY_SYMBOL.get(n);
         return exact != null ? exact : BY_SYMBOL_ANY_CASE.get(n.toLowerCase(Locale.ROOT));
-    }
-
-    /** @return the canonical symbols accepted for a dimension, in table order */
-    public static List<String> symbolsOf(Dimension dimension) {
-        return Collections.unmodifiableList(TABLE.stream()
-                .filter(e -> e.unit().dimension() == dimension)
-                .map(e -> e.unit().symbol())
-                .collect(Collectors.toList()));
     }
 
     /**

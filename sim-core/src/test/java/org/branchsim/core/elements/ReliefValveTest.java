@@ -53,10 +53,14 @@ class ReliefValveTest {
         assertTrue(pEnd > SETTING, "override must be positive");
         assertTrue(pEnd < SETTING * (1 + MAX_OVERRIDE), "override " + (pEnd / SETTING - 1) + " too large");
         assertEquals(q, t.series("relief.q")[p.length - 1], q * 0.01);
-        // and that override is what the steady force balance p A_s = F0 + k x + F_flow(x, p) gives at the final lift
+        // and that override is what the steady force balance p A_s = F0 + k x + F_flow(x, p) gives at the final lift,
+        // with the frustum seat area A = pi d x sin(alpha/2) (1 - x sin(alpha) / (2 d)) (REFERENCES.md) and Merritt's
+        // flow force 2 Cd Cv A p cos(alpha/2), the jet leaving at half the 90 deg cone angle (Merritt 1967)
         double xEnd = x[x.length - 1];
-        double flowForcePerPascal = g.flowForce(xEnd, 1.0);
-        double balance = (preload + g.springRate() * xEnd) / (g.seatArea() - flowForcePerPascal);
+        double half = Math.toRadians(45);
+        double flowArea = Math.PI * seat * xEnd * Math.sin(half) * (1 - xEnd * Math.sin(2 * half) / (2 * seat));
+        double flowForcePerPascal = 2 * 0.61 * 0.98 * flowArea * Math.cos(half);
+        double balance = (preload + 60e3 * xEnd) / (0.25 * Math.PI * seat * seat - flowForcePerPascal);
         assertEquals(balance, pEnd, balance * 1e-4);
     }
 }

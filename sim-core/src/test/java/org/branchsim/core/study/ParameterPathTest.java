@@ -36,7 +36,7 @@ class ParameterPathTest {
 
     private static BranchsimException refused(String path) {
         BranchsimException e = assertThrows(BranchsimException.class, () -> ParameterPath.parse(path).field(DEMO), path);
-        assertEquals(ErrorKey.BAD_ARGUMENT, e.key());
+        assertEquals(ErrorKey.UNDECLARED_PARAMETER_FIELD, e.key());
         assertTrue(e.key().isInputError());
         return e;
     }
@@ -74,7 +74,7 @@ class ParameterPathTest {
         ParameterPath.parse("elements.relief.coneAngle").setOrAdd(copy, "60 deg");
         assertEquals("60 deg", ((Located.Scalar) ParameterPath.parse("elements.relief.coneAngle").find(copy)).value());
         assertTrue(assertThrows(BranchsimException.class, () -> ParameterPath.parse("elements.relief.coneAngle")
-                .find(DEMO)).getMessage().contains("no \"coneAngle\" in the scenario"));
+                .find(DEMO)).getMessage().contains("found no \"coneAngle\""));
     }
 
     @Test
