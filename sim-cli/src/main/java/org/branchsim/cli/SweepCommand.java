@@ -100,18 +100,8 @@ public final class SweepCommand implements Callable<Integer> {
             List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), toRun, n,
                     new VariantProgress(err, toRun.size())::done, o -> StudyTable.Row.of(o, base.units(), overlay));
             err.println();
-            PrintWriter w = spec.commandLine().getOut();
-            if (part == null) {
-                SweepReport.write(study, rows, folder, w);
-            } else {
-                ShardFolder.write(folder, part, study, rows);
-            }
-            folder.commit();
-            if (part != null) {
-                ShardSummary.print(study, part, rows, folder.dir(), w);
-            }
-            folder.report(w);
-            w.println("Caution: " + Cautions.SHORT);
+            StudyOutput.finish(study, part, rows, folder, spec.commandLine().getOut(),
+                    (r, out, pw) -> SweepReport.write(study, r, out, pw));
         }
         return BranchsimMain.OK;
     }

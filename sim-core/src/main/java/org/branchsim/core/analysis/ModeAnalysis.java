@@ -132,14 +132,7 @@ public final class ModeAnalysis {
         if (n == 0) {
             return List.of();
         }
-        double norm = 0.0;
-        for (double[] row : a) {
-            double sum = 0.0;
-            for (double x : row) {
-                sum += Math.abs(x);
-            }
-            norm = Math.max(norm, sum);
-        }
+        double norm = Linearisation.rowSumNorm(a);
 
         // balance first (a diagonal similarity D^-1 A D: same eigenvalues, better conditioned for the QR
         // iteration); A's right eigenvectors are D v and its left ones w D^-1, so participation is unchanged

@@ -35,15 +35,20 @@ public final class Linearisation {
         this.states = states;
         this.scales = scales;
         this.scaled = scaled;
+        this.norm = rowSumNorm(scaled);
+    }
+
+    /** @return the largest row sum of absolute values of a matrix (its infinity norm), in its own unit */
+    public static double rowSumNorm(double[][] a) {
         double max = 0.0;
-        for (double[] row : scaled) {
+        for (double[] row : a) {
             double sum = 0.0;
-            for (double a : row) {
-                sum += Math.abs(a);
+            for (double x : row) {
+                sum += Math.abs(x);
             }
             max = Math.max(max, sum);
         }
-        this.norm = max;
+        return max;
     }
 
     /**
