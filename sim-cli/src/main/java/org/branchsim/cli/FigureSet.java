@@ -3,9 +3,11 @@ package org.branchsim.cli;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.units.Dimension;
+import org.branchsim.plots.LandingChart;
 import org.branchsim.plots.TraceCharts;
 
 /**
@@ -18,8 +20,17 @@ public final class FigureSet {
     private FigureSet() {
     }
 
-    /** Writes the figures into the folder. */
-    public static void write(Scenario scenario, Trace trace, OutputFolder out) {
+    /**
+     * Writes the figures into the folder: the standard ones, each plot group, and the landing of each reducing
+     * valve ({@code landing-<id>.png}).
+     */
+    public static void write(Scenario scenario, Trace trace, List<ReducingValveMetrics> valves, OutputFolder out) {
+        for (ReducingValveMetrics m : valves) {
+            if (trace.indexOf(m.id() + ".p.out") >= 0) {
+                out.write("landing-" + slug(m.id()) + ".png", p -> LandingChart.save(trace, m,
+                        scenario.name() + ": landing of reducing valve " + m.id(), scenario.units(), p));
+            }
+        }
         List<String> pressures = TraceCharts.signalsOf(trace, Dimension.PRESSURE);
         List<String> flows = TraceCharts.signalsOf(trace, Dimension.VOLUME_FLOW);
         List<String> positions = TraceCharts.signalsOf(trace, Dimension.LENGTH);

@@ -38,19 +38,49 @@ public final class TraceCharts {
     /** Height of one panel, px. */
     public static final int PANEL_HEIGHT = 360;
 
+    /**
+     * Eight colours told apart also by readers with a colour-vision deficiency (after Okabe and Ito, "Color
+     * Universal Design", 2008, with their yellow, weak on white, replaced by a brown); at most eight series share
+     * a panel, so within a panel every series has its own colour.
+     */
     private static final Color[] PALETTE = {
-        new Color(0x1f5fa8), new Color(0xc8102e), new Color(0x2e8b57), new Color(0xe07b00),
-        new Color(0x6a3d9a), new Color(0x008b8b), new Color(0x8b5a2b), new Color(0x444444),
-        new Color(0xd4a017), new Color(0xe75480), new Color(0x7fa7d9), new Color(0x9acd32)
+        new Color(0x0072b2), new Color(0xd55e00), new Color(0x009e73), new Color(0xe69f00),
+        new Color(0xcc79a7), new Color(0x56b4e9), new Color(0x000000), new Color(0x8b5a2b)
     };
+    /** Dash patterns cycled beside the colours (solid, dashed, dotted, dash-dot), px. */
+    private static final float[][] DASHES = {null, {7f, 4f}, {2f, 3f}, {8f, 3f, 2f, 3f}};
 
-    /** Line style of series k: a palette colour, dashed on the second pass through the palette. */
-    private static void style(XYLineAndShapeRenderer renderer, int k, float width) {
-        renderer.setSeriesPaint(k, PALETTE[k % PALETTE.length]);
-        boolean dashed = (k / PALETTE.length) % 2 == 1;
-        renderer.setSeriesStroke(k, dashed
-                ? new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f)
-                : new BasicStroke(width));
+    /** @return palette colour k */
+    static Color colour(int k) {
+        return PALETTE[k % PALETTE.length];
+    }
+
+    /** Line style of series k: palette colour k and a dash pattern that changes from one series to the next. */
+    static void style(XYLineAndShapeRenderer renderer, int k, float width) {
+        renderer.setSeriesPaint(k, colour(k));
+        float[] dash = DASHES[k % DASHES.length];
+        renderer.setSeriesStroke(k, dash == null ? new BasicStroke(width)
+                : new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, dash, 0f));
+    }
+
+    /** White background, light grid. */
+    static void grid(XYPlot plot) {
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setDomainGridlinePaint(new Color(0xd0d0d0));
+        plot.setRangeGridlinePaint(new Color(0xd0d0d0));
+    }
+
+    /** @return one signal's samples in [from, to] in a display unit, keyed by a label */
+    static XYSeries series(Trace trace, String signal, String label, Unit unit, double from, double to) {
+        double[] t = trace.times();
+        double[] v = trace.series(trace.indexOf(signal));
+        XYSeries s = new XYSeries(label, false, true);
+        for (int k = 0; k < v.length; k++) {
+            if (t[k] >= from && t[k] <= to) {
+                s.add(t[k], unit.fromSi(v[k]), false);
+            }
+        }
+        return s;
     }
 
     private TraceCharts() {
@@ -160,7 +190,7 @@ public final class TraceCharts {
     }
 
     /** Adds the white background and the caution footnote every figure carries. */
-    private static JFreeChart withCaution(JFreeChart chart) {
+    static JFreeChart withCaution(JFreeChart chart) {
         chart.setBackgroundPaint(Color.WHITE);
         TextTitle note = new TextTitle(CAUTION, new Font(Font.SANS_SERIF, Font.ITALIC, 11));
         note.setPosition(RectangleEdge.BOTTOM);
