@@ -8,12 +8,16 @@ import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.plots.LandingChart;
+import org.branchsim.plots.SignalPanels;
 import org.branchsim.plots.TraceCharts;
 
 /**
- * Chooses and writes a run's figures (signals that stay zero throughout are left out): pressures and flows
- * overlaid, positions stacked (their scales differ by orders of magnitude), then each plot group the
- * scenario names (overlaid when its signals share a dimension other than length, stacked otherwise).
+ * Chooses and writes a run's figures (signals that stay zero throughout are left out, a signal identical to an
+ * earlier one is drawn once under both names): pressures overlaid, at most eight to a panel; flows overlaid with
+ * the small ones (below a tenth of the largest) on a panel of their own; positions each on its own panel (their
+ * scales differ by orders of magnitude); value axes fitted to the signals after start-up (the scenario's metrics
+ * window start), time axes ending at the end time. Then each plot group the scenario names (overlaid when its
+ * signals share a dimension other than length, stacked otherwise), and the landing of each reducing valve.
  */
 public final class FigureSet {
 
@@ -31,20 +35,25 @@ public final class FigureSet {
                         scenario.name() + ": landing of reducing valve " + m.id(), scenario.units(), p));
             }
         }
-        List<String> pressures = TraceCharts.signalsOf(trace, Dimension.PRESSURE);
-        List<String> flows = TraceCharts.signalsOf(trace, Dimension.VOLUME_FLOW);
-        List<String> positions = TraceCharts.signalsOf(trace, Dimension.LENGTH);
+        List<SignalPanels.Drawn> pressures = SignalPanels.distinct(trace,
+                TraceCharts.signalsOf(trace, Dimension.PRESSURE));
+        List<SignalPanels.Drawn> flows = SignalPanels.distinct(trace,
+                TraceCharts.signalsOf(trace, Dimension.VOLUME_FLOW));
+        List<SignalPanels.Drawn> positions = SignalPanels.distinct(trace,
+                TraceCharts.signalsOf(trace, Dimension.LENGTH));
         String name = scenario.name();
+        double fitFrom = scenario.metricsFrom();
         if (!pressures.isEmpty()) {
-            out.write("pressures.png", p -> TraceCharts.overlay(trace, pressures, name + ": pressures",
-                    scenario.units(), p));
+            out.write("pressures.png", p -> TraceCharts.panels(trace, SignalPanels.limited(pressures),
+                    name + ": pressures", scenario.units(), fitFrom, p));
         }
         if (!flows.isEmpty()) {
-            out.write("flows.png", p -> TraceCharts.overlay(trace, flows, name + ": flows", scenario.units(), p));
+            out.write("flows.png", p -> TraceCharts.panels(trace, SignalPanels.bySize(trace, flows, fitFrom),
+                    name + ": flows (small flows on their own panel)", scenario.units(), fitFrom, p));
         }
         if (!positions.isEmpty()) {
-            out.write("positions.png", p -> TraceCharts.stacked(trace, positions, name + ": positions",
-                    scenario.units(), p));
+            out.write("positions.png", p -> TraceCharts.panels(trace, SignalPanels.single(positions),
+                    name + ": positions", scenario.units(), fitFrom, p));
         }
         int k = 1;
         for (Scenario.PlotGroup g : scenario.plots()) {
