@@ -17,7 +17,8 @@ import org.branchsim.plots.TraceCharts;
  * the small ones (below a tenth of the largest) on a panel of their own; positions each on its own panel (their
  * scales differ by orders of magnitude); value axes fitted to the signals after start-up (the scenario's metrics
  * window start), time axes ending at the end time. Then each plot group the scenario names (overlaid when its
- * signals share a dimension other than length, stacked otherwise), and the landing of each reducing valve.
+ * signals share a dimension other than length, small flows apart, stacked otherwise), and the landing of each
+ * reducing valve.
  */
 public final class FigureSet {
 
@@ -49,7 +50,7 @@ public final class FigureSet {
         }
         if (!flows.isEmpty()) {
             out.write("flows.png", p -> TraceCharts.panels(trace, SignalPanels.bySize(trace, flows, fitFrom),
-                    name + ": flows (small flows on their own panel)", scenario.units(), fitFrom, p));
+                    name + ": flows", scenario.units(), fitFrom, p));
         }
         if (!positions.isEmpty()) {
             out.write("positions.png", p -> TraceCharts.panels(trace, SignalPanels.single(positions),
@@ -63,13 +64,11 @@ public final class FigureSet {
                     .map(s -> trace.columns().get(trace.indexOf(s)).dimension()).distinct().toList();
             // positions of different members differ by orders of magnitude: give each its own panel
             boolean oneDimension = dims.size() == 1 && dims.get(0) != Dimension.LENGTH;
-            out.write(file, p -> {
-                if (oneDimension) {
-                    TraceCharts.overlay(trace, signals, g.title(), scenario.units(), p);
-                } else {
-                    TraceCharts.stacked(trace, signals, g.title(), scenario.units(), p);
-                }
-            });
+            List<SignalPanels.Drawn> drawn = SignalPanels.distinct(trace, signals);
+            List<List<SignalPanels.Drawn>> panels = !oneDimension ? SignalPanels.single(drawn)
+                    : dims.get(0) == Dimension.VOLUME_FLOW ? SignalPanels.bySize(trace, drawn, fitFrom)
+                    : SignalPanels.limited(drawn);
+            out.write(file, p -> TraceCharts.panels(trace, panels, g.title(), scenario.units(), fitFrom, p));
         }
     }
 

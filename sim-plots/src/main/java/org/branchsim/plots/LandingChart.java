@@ -20,6 +20,7 @@ import org.jfree.chart.plot.IntervalMarker;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.Layer;
 import org.jfree.chart.ui.RectangleAnchor;
 import org.jfree.chart.ui.TextAnchor;
@@ -120,7 +121,29 @@ public final class LandingChart {
             combined.add(members, 2);
         }
         JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, combined, true);
+        chart.addSubtitle(new TextTitle(verdict(m), new Font(Font.SANS_SERIF, Font.PLAIN, 12)));
         return TraceCharts.withCaution(chart);
+    }
+
+    /** @return the settling result in words, with what it is measured from */
+    static String verdict(ReducingValveMetrics m) {
+        if (m.oscillating()) {
+            return String.format(Locale.ROOT, "does not settle: an oscillation of %.1f Hz persists at this valve",
+                    m.oscillationFrequency());
+        }
+        if (!m.settled()) {
+            return String.format(Locale.ROOT, "not inside +-%.0f %% of the setting at the end of the metrics window",
+                    100 * ReducingValveMetrics.BAND);
+        }
+        if (Double.isNaN(m.settlingTime())) {
+            return String.format(Locale.ROOT, "inside +-%.0f %% of the setting from %.3f s (no rise through %.0f %% "
+                    + "of the setting in the metrics window)", 100 * ReducingValveMetrics.BAND, m.settledAt(),
+                    100 * ReducingValveMetrics.RISE_FRACTION);
+        }
+        return String.format(Locale.ROOT, "settling time %.3f s: from the rise through %.0f %% of the setting at "
+                + "%.3f s to staying inside +-%.0f %% of the setting from %.3f s", m.settlingTime(),
+                100 * ReducingValveMetrics.RISE_FRACTION, m.riseTime(), 100 * ReducingValveMetrics.BAND,
+                m.settledAt());
     }
 
     private static XYPlot pressurePanel(Trace trace, ReducingValveMetrics m, String outlet, UnitSystem units,

@@ -138,6 +138,13 @@ class LandingChartTest {
             caution |= chart.getSubtitle(i) instanceof TextTitle tt && tt.getText().equals(TraceCharts.CAUTION);
         }
         assertTrue(caution);
+        boolean verdict = false;
+        for (int i = 0; i < chart.getSubtitleCount(); i++) {
+            verdict |= chart.getSubtitle(i) instanceof TextTitle tt && tt.getText().startsWith(String.format(
+                    java.util.Locale.ROOT, "settling time %.3f s", m.settlingTime()));
+        }
+        assertTrue(verdict, "the settling time is stated");
+        assertTrue(LandingChart.verdict(m.withPersistingOscillation(18.5)).contains("18.5 Hz"));
     }
 
     @Test
