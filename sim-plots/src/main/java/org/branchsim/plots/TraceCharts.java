@@ -283,8 +283,10 @@ public final class TraceCharts {
             grid(p);
             combined.add(p, 1);
             if (range.clips()) {
+                String which = panels.size() > 1
+                        ? String.format(Locale.ROOT, "panel %d (%s)", combined.getSubplots().size(), label) : label;
                 clipped.add(String.format(Locale.ROOT, "%s axis fitted to the signals from %.3g s on: %s %.4g %s "
-                        + "at %.3f s is off the axis (clipped)", label, Math.max(fitFrom, t[0]),
+                        + "at %.3f s is off the axis (clipped)", which, Math.max(fitFrom, t[0]),
                         range.clippedTime() < fitFrom ? "start-up value" : "short spike", range.clippedValue(),
                         u.symbol(), range.clippedTime()));
             }
