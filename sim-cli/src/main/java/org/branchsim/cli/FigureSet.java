@@ -3,37 +3,58 @@ package org.branchsim.cli;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.units.Dimension;
+import org.branchsim.plots.LandingChart;
+import org.branchsim.plots.SignalPanels;
 import org.branchsim.plots.TraceCharts;
 
 /**
- * Chooses and writes a run's figures (signals that stay zero throughout are left out): pressures and flows
- * overlaid, positions stacked (their scales differ by orders of magnitude), then each plot group the
- * scenario names (overlaid when its signals share a dimension other than length, stacked otherwise).
+ * Chooses and writes a run's figures (signals that stay zero throughout are left out, a signal identical to an
+ * earlier one is drawn once under both names): pressures overlaid, at most eight to a panel; flows overlaid with
+ * the small ones (below a tenth of the largest) on a panel of their own; positions each on its own panel (their
+ * scales differ by orders of magnitude); value axes fitted to the signals after start-up (the scenario's metrics
+ * window start), time axes ending at the end time. Then each plot group the scenario names (overlaid when its
+ * signals share a dimension other than length, small flows apart, stacked otherwise), and the landing of each
+ * reducing valve.
  */
 public final class FigureSet {
 
     private FigureSet() {
     }
 
-    /** Writes the figures into the folder. */
-    public static void write(Scenario scenario, Trace trace, OutputFolder out) {
-        List<String> pressures = TraceCharts.signalsOf(trace, Dimension.PRESSURE);
-        List<String> flows = TraceCharts.signalsOf(trace, Dimension.VOLUME_FLOW);
-        List<String> positions = TraceCharts.signalsOf(trace, Dimension.LENGTH);
+    /**
+     * Writes the figures into the folder: the standard ones, each plot group, and the landing of each reducing
+     * valve ({@code landing-<id>.png}).
+     */
+    public static void write(Scenario scenario, Trace trace, List<ReducingValveMetrics> valves, OutputFolder out) {
+        for (ReducingValveMetrics m : valves) {
+            if (trace.indexOf(m.id() + ".p.out") >= 0) {
+                out.write("landing-" + slug(m.id()) + ".png", p -> LandingChart.save(trace, m,
+                        scenario.name() + ": landing of reducing valve " + m.id(), scenario.units(), p));
+            }
+        }
+        List<SignalPanels.Drawn> pressures = SignalPanels.distinct(trace,
+                TraceCharts.signalsOf(trace, Dimension.PRESSURE));
+        List<SignalPanels.Drawn> flows = SignalPanels.distinct(trace,
+                TraceCharts.signalsOf(trace, Dimension.VOLUME_FLOW));
+        List<SignalPanels.Drawn> positions = SignalPanels.distinct(trace,
+                TraceCharts.signalsOf(trace, Dimension.LENGTH));
         String name = scenario.name();
+        double fitFrom = scenario.metricsFrom();
         if (!pressures.isEmpty()) {
-            out.write("pressures.png", p -> TraceCharts.overlay(trace, pressures, name + ": pressures",
-                    scenario.units(), p));
+            out.write("pressures.png", p -> TraceCharts.panels(trace, SignalPanels.limited(pressures),
+                    name + ": pressures", scenario.units(), fitFrom, p));
         }
         if (!flows.isEmpty()) {
-            out.write("flows.png", p -> TraceCharts.overlay(trace, flows, name + ": flows", scenario.units(), p));
+            out.write("flows.png", p -> TraceCharts.panels(trace, SignalPanels.bySize(trace, flows, fitFrom),
+                    name + ": flows", scenario.units(), fitFrom, p));
         }
         if (!positions.isEmpty()) {
-            out.write("positions.png", p -> TraceCharts.stacked(trace, positions, name + ": positions",
-                    scenario.units(), p));
+            out.write("positions.png", p -> TraceCharts.panels(trace, SignalPanels.single(positions),
+                    name + ": positions", scenario.units(), fitFrom, p));
         }
         int k = 1;
         for (Scenario.PlotGroup g : scenario.plots()) {
@@ -43,13 +64,11 @@ public final class FigureSet {
                     .map(s -> trace.columns().get(trace.indexOf(s)).dimension()).distinct().toList();
             // positions of different members differ by orders of magnitude: give each its own panel
             boolean oneDimension = dims.size() == 1 && dims.get(0) != Dimension.LENGTH;
-            out.write(file, p -> {
-                if (oneDimension) {
-                    TraceCharts.overlay(trace, signals, g.title(), scenario.units(), p);
-                } else {
-                    TraceCharts.stacked(trace, signals, g.title(), scenario.units(), p);
-                }
-            });
+            List<SignalPanels.Drawn> drawn = SignalPanels.distinct(trace, signals);
+            List<List<SignalPanels.Drawn>> panels = !oneDimension ? SignalPanels.single(drawn)
+                    : dims.get(0) == Dimension.VOLUME_FLOW ? SignalPanels.bySize(trace, drawn, fitFrom)
+                    : SignalPanels.limited(drawn);
+            out.write(file, p -> TraceCharts.panels(trace, panels, g.title(), scenario.units(), fitFrom, p));
         }
     }
 

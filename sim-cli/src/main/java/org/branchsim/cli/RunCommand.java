@@ -48,7 +48,7 @@ public final class RunCommand implements Callable<Integer> {
             String summary = summary(s, result, valves, oscillations);
             folder.writeText("trace.csv", TraceCsv.format(result.trace(), s.units()));
             folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
-            FigureSet.write(s, result.trace(), folder);
+            FigureSet.write(s, result.trace(), valves, folder);
             folder.writeText("summary.txt", summary);
             folder.commit();
             PrintWriter w = spec.commandLine().getOut();

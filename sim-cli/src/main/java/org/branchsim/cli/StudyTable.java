@@ -1,10 +1,13 @@
 package org.branchsim.cli;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.ReducingValveMetrics;
@@ -24,6 +27,7 @@ import org.branchsim.core.study.VariantOutcome;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Unit;
 import org.branchsim.core.units.UnitSystem;
+import org.branchsim.core.units.Units;
 
 /**
  * Flattens the metrics of study variants into named numeric columns (units in the names) for summary.csv,
@@ -180,25 +184,52 @@ final class StudyTable {
     }
 
     /**
-     * @param parameters varied parameter paths (columns after the variant number)
+     * @param parameters varied parameter paths (columns after the variant id)
      * @param rows the rows
      * @param cols metric columns
-     * @return the CSV text: variant, parameters, status, error, metrics
+     * @return the CSV text: variant id, parameters, status, error, metrics (no rank column)
      */
     static String csv(List<String> parameters, List<Row> rows, List<String> cols) {
+        return csv(parameters, rows, cols, null);
+    }
+
+    /**
+     * Writes the table a spreadsheet reads: the variant id (its 0-based position in the study), the rank when
+     * {@code ranks} is given (1 = best, empty for a failed variant or one without the metric), each varied
+     * parameter as a number in the unit written in its header ({@code elements.prv.dampingOrifice.diameter [mm]},
+     * the unit of the first variant's value; text that is not a number with a unit stays text), status, error
+     * and the metrics (integers as integers).
+     *
+     * @param parameters varied parameter paths
+     * @param rows the rows, in variant order
+     * @param cols metric columns
+     * @param ranks rank of each row (same order as rows), or null for no rank column
+     * @return the CSV text
+     */
+    static String csv(List<String> parameters, List<Row> rows, List<String> cols, int[] ranks) {
         StringBuilder sb = new StringBuilder("variant");
+        if (ranks != null) {
+            sb.append(",rank");
+        }
+        List<Unit> units = new ArrayList<>();
         for (String p : parameters) {
-            sb.append(',').append(field(p));
+            Unit u = parameterUnit(p, rows);
+            units.add(u);
+            sb.append(',').append(field(u == null || u.symbol().equals("1") ? p : p + " [" + u.symbol() + "]"));
         }
         sb.append(",status,error");
         for (String c : cols) {
             sb.append(',').append(field(c));
         }
         sb.append('\n');
-        for (Row r : rows) {
+        for (int i = 0; i < rows.size(); i++) {
+            Row r = rows.get(i);
             sb.append(r.variant().index());
-            for (String p : parameters) {
-                sb.append(',').append(field(String.valueOf(r.variant().values().get(p))));
+            if (ranks != null) {
+                sb.append(',').append(ranks[i] > 0 ? String.valueOf(ranks[i]) : "");
+            }
+            for (int k = 0; k < parameters.size(); k++) {
+                sb.append(',').append(parameterField(r.variant().values().get(parameters.get(k)), units.get(k)));
             }
             sb.append(',').append(r.ok() ? "ok" : "failed").append(',').append(field(r.error()));
             for (String c : cols) {
@@ -209,13 +240,100 @@ final class StudyTable {
         return sb.toString();
     }
 
-    /** @return a CSV field: numbers with 7 significant digits, text quoted when needed */
+    private static final Pattern NUMBER_AND_UNIT =
+            Pattern.compile("^\\s*([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(.*?)\\s*$");
+
+    /** @return the unit of the first variant's value of a parameter written as a number with a known unit, or null */
+    private static Unit parameterUnit(String parameter, List<Row> rows) {
+        for (Row r : rows) {
+            Object v = r.variant().values().get(parameter);
+            if (v != null) {
+                Matcher m = NUMBER_AND_UNIT.matcher(String.valueOf(v));
+                return m.matches() && !m.group(2).isEmpty() ? Units.find(m.group(2)) : null;
+            }
+        }
+        return null;
+    }
+
+    /** @return a parameter value as a number in the column's unit, or as text when it is not one */
+    private static String parameterField(Object value, Unit column) {
+        if (value instanceof Number n) {
+            return field(n.doubleValue());
+        }
+        String text = String.valueOf(value);
+        Matcher m = NUMBER_AND_UNIT.matcher(text);
+        if (value != null && m.matches()) {
+            double number = Double.parseDouble(m.group(1));
+            if (m.group(2).isEmpty() && column == null) {
+                return field(number);
+            }
+            Unit u = m.group(2).isEmpty() ? null : Units.find(m.group(2));
+            if (column != null && u != null && u.dimension() == column.dimension()) {
+                return field(u.symbol().equals(column.symbol()) ? number : column.fromSi(u.toSi(number)));
+            }
+        }
+        return field(value == null ? null : text);
+    }
+
+    /**
+     * Ranks rows by a metric: 1 for the best (smallest, or largest when descending), ties kept in variant order,
+     * 0 for a failed row or one without a finite value of the metric.
+     *
+     * @param rows rows in variant order
+     * @param metric the metric column, or null for no ranking (every rank 0)
+     * @param descending true when larger is better
+     * @return rank per row
+     */
+    static int[] ranks(List<Row> rows, String metric, boolean descending) {
+        int[] rank = new int[rows.size()];
+        if (metric == null) {
+            return rank;
+        }
+        List<Integer> order = new ArrayList<>();
+        for (int i = 0; i < rows.size(); i++) {
+            Double v = rows.get(i).metrics().get(metric);
+            if (rows.get(i).ok() && v != null && Double.isFinite(v)) {
+                order.add(i);
+            }
+        }
+        order.sort(Comparator.comparingDouble(i -> descending ? -rows.get(i).metrics().get(metric)
+                : rows.get(i).metrics().get(metric)));
+        for (int k = 0; k < order.size(); k++) {
+            rank[order.get(k)] = k + 1;
+        }
+        return rank;
+    }
+
+    /** @return a number's text with the zeros that end its mantissa removed ("0.2000000" to "0.2") */
+    private static String withoutTrailingZeros(String number) {
+        int e = number.indexOf('e');
+        String mantissa = e < 0 ? number : number.substring(0, e);
+        String exponent = e < 0 ? "" : number.substring(e);
+        if (mantissa.contains(".")) {
+            mantissa = mantissa.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+        return mantissa + exponent;
+    }
+
+    /** Largest magnitude written as an integer when a value is whole. */
+    private static final double LARGEST_WHOLE = 1e15;
+
+    /**
+     * @return a CSV field: whole numbers as integers ("8049"), other numbers with at most 7 significant digits,
+     *         text quoted when needed
+     */
     static String field(Object v) {
         if (v == null) {
             return "";
         }
         if (v instanceof Double d) {
-            return Double.isFinite(d) ? String.format(Locale.ROOT, "%.7g", d) : "";
+            if (!Double.isFinite(d)) {
+                return "";
+            }
+            if (d == Math.rint(d) && Math.abs(d) < LARGEST_WHOLE) {
+                return Long.toString((long) (double) d);
+            }
+            return withoutTrailingZeros(String.format(Locale.ROOT, "%.7g", d));
         }
         String s = String.valueOf(v);
         if (s.contains(",") || s.contains("\"") || s.contains("\n")) {

@@ -32,7 +32,8 @@ final class SweepReport {
         printRanked(rows, study.rankBy(), study.descending(), out);
         StudyTable.requireOneSuccess(rows);
         List<String> cols = StudyTable.columns(rows);
-        folder.writeText("summary.csv", StudyTable.csv(study.parameters(), rows, cols));
+        folder.writeText("summary.csv", StudyTable.csv(study.parameters(), rows, cols,
+                StudyTable.ranks(rows, study.rankBy(), study.descending())));
         writeOverlays(study, rows, folder);
     }
 
@@ -61,21 +62,19 @@ final class SweepReport {
     }
 
     private static void printRanked(List<StudyTable.Row> rows, String metric, boolean descending, PrintWriter w) {
+        int[] rank = StudyTable.ranks(rows, metric, descending);
         List<Integer> order = new ArrayList<>();
         for (int i = 0; i < rows.size(); i++) {
             order.add(i);
         }
-        if (metric != null) {
-            order.sort(Comparator.comparingDouble(i -> {
-                Double v = rows.get(i).metrics().get(metric);
-                return v == null || !Double.isFinite(v) ? Double.MAX_VALUE : (descending ? -v : v);
-            }));
-        }
+        // ranked rows first, best first; then those without a rank, in variant order
+        order.sort(Comparator.comparingInt(i -> rank[i] > 0 ? rank[i] : Integer.MAX_VALUE));
         w.printf("%d variants, ranked by %s%s:%n", rows.size(), metric, descending ? " (largest first)" : "");
         for (int i : order) {
             StudyTable.Row r = rows.get(i);
             Double v = metric == null ? null : r.metrics().get(metric);
-            w.printf(Locale.ROOT, "  #%-3d %-50s %s%n", r.variant().index(), label(r.variant()),
+            w.printf(Locale.ROOT, "  %4s  variant %-3d %-50s %s%n", rank[i] > 0 ? rank[i] + "." : "-",
+                    r.variant().index(), label(r.variant()),
                     r.ok() ? (v == null ? "-" : String.format(Locale.ROOT, "%.4g", v)) : "FAILED: " + r.error());
         }
     }

@@ -118,7 +118,7 @@ class OptionRefusalTest {
                 "--rank-by", "pumpline.p.peak", "--threads", "1", "--out", out.toString());
         assertEquals(0, o.code(), o.err());
         String header = Files.readAllLines(out.resolve("summary.csv")).get(0);
-        List<String> written = Arrays.asList(header.split(",")).subList(4, header.split(",").length);
+        List<String> written = Arrays.asList(header.split(",")).subList(5, header.split(",").length);
         assertEquals(StudyTable.columnsOf(ScenarioLoader.load(Path.of(FEED))), written);
     }
 

@@ -29,8 +29,11 @@ class StudyCommandsTest {
         assertEquals(a, b);
         List<String> lines = a.lines().toList();
         assertEquals(1 + 6, lines.size(), "header plus 3 x 2 variants");
-        assertTrue(lines.get(0).startsWith("variant,elements.relief.damping,nodes.pumpLine.volume,status,error,"));
-        assertTrue(lines.get(1).contains("30 N*s/m,0.2 L,ok"), lines.get(1));
+        // a spreadsheet reads numbers: numeric parameter columns with the unit in the header, a rank apart from
+        // the variant id (issue 13 item 6)
+        assertTrue(lines.get(0).startsWith(
+                "variant,rank,elements.relief.damping [N*s/m],nodes.pumpLine.volume [L],status,error,"), lines.get(0));
+        assertTrue(lines.get(1).startsWith("0,") && lines.get(1).contains(",30,0.2,ok,"), lines.get(1));
         assertTrue(one.out().contains("6 variants, ranked by pumpLine.p.peak [bar]"), one.out());
         assertTrue(one.err().contains("variants 6/6 done"), one.err());
         assertTrue(ImageIO.read(dir.resolve("one").resolve("overlay-pumpline-p.png").toFile()) != null);

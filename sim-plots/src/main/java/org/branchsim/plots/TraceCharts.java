@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.branchsim.core.results.Trace;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Unit;
@@ -38,19 +39,60 @@ public final class TraceCharts {
     /** Height of one panel, px. */
     public static final int PANEL_HEIGHT = 360;
 
+    /**
+     * Eight colours told apart also by readers with a colour-vision deficiency (after Okabe and Ito, "Color
+     * Universal Design", 2008, with their yellow, weak on white, replaced by a brown); at most eight series share
+     * a panel, so within a panel every series has its own colour.
+     */
     private static final Color[] PALETTE = {
-        new Color(0x1f5fa8), new Color(0xc8102e), new Color(0x2e8b57), new Color(0xe07b00),
-        new Color(0x6a3d9a), new Color(0x008b8b), new Color(0x8b5a2b), new Color(0x444444),
-        new Color(0xd4a017), new Color(0xe75480), new Color(0x7fa7d9), new Color(0x9acd32)
+        new Color(0x0072b2), new Color(0xd55e00), new Color(0x009e73), new Color(0xe69f00),
+        new Color(0xcc79a7), new Color(0x56b4e9), new Color(0x000000), new Color(0x8b5a2b)
     };
+    /** Dash patterns cycled beside the colours (solid, dashed, dotted, dash-dot), px. */
+    private static final float[][] DASHES = {null, {7f, 4f}, {2f, 3f}, {8f, 3f, 2f, 3f}};
 
-    /** Line style of series k: a palette colour, dashed on the second pass through the palette. */
-    private static void style(XYLineAndShapeRenderer renderer, int k, float width) {
-        renderer.setSeriesPaint(k, PALETTE[k % PALETTE.length]);
-        boolean dashed = (k / PALETTE.length) % 2 == 1;
-        renderer.setSeriesStroke(k, dashed
-                ? new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f)
-                : new BasicStroke(width));
+    /** @return palette colour k */
+    static Color colour(int k) {
+        return PALETTE[k % PALETTE.length];
+    }
+
+    /**
+     * Line style of series k: palette colour k, and a dash pattern that changes from one series to the next and
+     * between passes through the palette, so that the first 32 series differ in colour or dash.
+     */
+    static void style(XYLineAndShapeRenderer renderer, int k, float width) {
+        style(renderer, k, k, width);
+    }
+
+    /**
+     * Gives series {@code index} of a panel the line style of series k of a figure: colour k, and a dash pattern
+     * set by the index on the panel (the first series of a panel is solid) and the pass through the palette.
+     */
+    static void style(XYLineAndShapeRenderer renderer, int index, int k, float width) {
+        renderer.setSeriesPaint(index, colour(k));
+        float[] dash = DASHES[(index + k / PALETTE.length) % DASHES.length];
+        renderer.setSeriesStroke(index, dash == null ? new BasicStroke(width)
+                : new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, dash, 0f));
+    }
+
+    /** White background, light grid. */
+    static void grid(XYPlot plot) {
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setDomainGridlinePaint(new Color(0xd0d0d0));
+        plot.setRangeGridlinePaint(new Color(0xd0d0d0));
+    }
+
+    /** @return one signal's samples in [from, to] in a display unit, keyed by a label */
+    static XYSeries series(Trace trace, String signal, String label, Unit unit, double from, double to) {
+        double[] t = trace.times();
+        double[] v = trace.series(trace.indexOf(signal));
+        XYSeries s = new XYSeries(label, false, true);
+        for (int k = 0; k < v.length; k++) {
+            if (t[k] >= from && t[k] <= to) {
+                s.add(t[k], unit.fromSi(v[k]), false);
+            }
+        }
+        return s;
     }
 
     private TraceCharts() {
@@ -97,7 +139,7 @@ public final class TraceCharts {
     /** @return the chart {@link #stacked} draws, with its caution, before it is saved */
     static JFreeChart stackedChart(Trace trace, List<String> signals, String title, UnitSystem units) {
         requireSignals(trace, signals);
-        CombinedDomainXYPlot combined = new CombinedDomainXYPlot(timeAxis());
+        CombinedDomainXYPlot combined = new CombinedDomainXYPlot(timeAxis(trace));
         combined.setGap(8.0);
         int k = 0;
         for (String s : signals) {
@@ -152,15 +194,24 @@ public final class TraceCharts {
         for (int k = 0; k < signals.size(); k++) {
             style(renderer, k, 1.6f);
         }
-        XYPlot plot = new XYPlot(data, timeAxis(), y, renderer);
-        plot.setBackgroundPaint(Color.WHITE);
-        plot.setDomainGridlinePaint(new Color(0xd0d0d0));
-        plot.setRangeGridlinePaint(new Color(0xd0d0d0));
+        XYPlot plot = new XYPlot(data, timeAxis(trace), y, renderer);
+        grid(plot);
         return plot;
     }
 
+    /** @return a time axis from the first to the last sample of the trace, no margin past the end time */
+    private static NumberAxis timeAxis(Trace trace) {
+        NumberAxis t = timeAxis();
+        double[] times = trace.times();
+        if (times.length > 1 && times[times.length - 1] > times[0]) {
+            t.setAutoRange(false);
+            t.setRange(times[0], times[times.length - 1]);
+        }
+        return t;
+    }
+
     /** Adds the white background and the caution footnote every figure carries. */
-    private static JFreeChart withCaution(JFreeChart chart) {
+    static JFreeChart withCaution(JFreeChart chart) {
         chart.setBackgroundPaint(Color.WHITE);
         TextTitle note = new TextTitle(CAUTION, new Font(Font.SANS_SERIF, Font.ITALIC, 11));
         note.setPosition(RectangleEdge.BOTTOM);
@@ -171,6 +222,82 @@ public final class TraceCharts {
 
     private static void save(JFreeChart chart, Path file, int height) throws IOException {
         ChartUtils.saveChartAsPNG(file.toFile(), chart, WIDTH, height);
+    }
+
+    /**
+     * Draws groups of signals on panels stacked over one time axis that ends at the trace's end time; each panel's
+     * value axis is fitted to its signals from {@code fitFrom} on (after start-up), and a note under the title
+     * names every panel whose start-up values fall outside its axis (clipped), with the extreme value and its time.
+     *
+     * @param trace the trace
+     * @param panels groups of signals, one group per panel; the signals of a group share one dimension
+     * @param title figure title
+     * @param units unit system for the axes
+     * @param fitFrom end of start-up, s (use the trace's start time to fit to all samples)
+     * @param file PNG to write
+     * @throws IOException when the file cannot be written
+     */
+    public static void panels(Trace trace, List<List<SignalPanels.Drawn>> panels, String title, UnitSystem units,
+                              double fitFrom, Path file) throws IOException {
+        save(panelsChart(trace, panels, title, units, fitFrom), file,
+                Math.max(PANEL_HEIGHT + 120, 110 + (panels.size() == 1 ? PANEL_HEIGHT : 230 * panels.size())));
+    }
+
+    /** @return the chart {@link #panels} draws, with its caution, before it is saved */
+    static JFreeChart panelsChart(Trace trace, List<List<SignalPanels.Drawn>> panels, String title, UnitSystem units,
+                                  double fitFrom) {
+        if (panels.isEmpty() || panels.stream().anyMatch(List::isEmpty)) {
+            throw new IllegalArgumentException("no signals to draw");
+        }
+        CombinedDomainXYPlot combined = new CombinedDomainXYPlot(timeAxis(trace));
+        combined.setGap(10.0);
+        List<String> clipped = new ArrayList<>();
+        int k = 0;
+        double[] t = trace.times();
+        for (List<SignalPanels.Drawn> group : panels) {
+            for (SignalPanels.Drawn d : group) {
+                requireSignals(trace, List.of(d.signal()));
+            }
+            Dimension dim = trace.columns().get(trace.indexOf(group.get(0).signal())).dimension();
+            Unit u = units.displayUnit(dim);
+            XYSeriesCollection data = new XYSeriesCollection();
+            XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
+            List<double[]> values = new ArrayList<>();
+            for (int i = 0; i < group.size(); i++) {
+                SignalPanels.Drawn d = group.get(i);
+                data.addSeries(series(trace, d.signal(), d.label(), u, t[0], t[t.length - 1]));
+                style(r, i, k++, 1.5f);
+                double[] v = trace.series(trace.indexOf(d.signal()));
+                double[] shown = new double[v.length];
+                for (int j = 0; j < v.length; j++) {
+                    shown[j] = u.fromSi(v[j]);
+                }
+                values.add(shown);
+            }
+            FittedRange range = FittedRange.of(t, values, fitFrom);
+            String label = group.size() == 1 ? group.get(0).label() : dim.humanName();
+            NumberAxis y = new NumberAxis(label + " [" + u.symbol() + "]");
+            y.setAutoRange(false);
+            y.setRange(range.low(), range.high());
+            XYPlot p = new XYPlot(data, null, y, r);
+            grid(p);
+            combined.add(p, 1);
+            if (range.clips()) {
+                String which = panels.size() > 1
+                        ? String.format(Locale.ROOT, "panel %d (%s)", combined.getSubplots().size(), label) : label;
+                clipped.add(String.format(Locale.ROOT, "%s axis fitted to the signals from %.3g s on: %s %.4g %s "
+                        + "at %.3f s is off the axis (clipped)", which, Math.max(fitFrom, t[0]),
+                        range.clippedTime() < fitFrom ? "start-up value" : "short spike", range.clippedValue(),
+                        u.symbol(), range.clippedTime()));
+            }
+        }
+        JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, combined, true);
+        for (String note : clipped) {
+            TextTitle n = new TextTitle(note, new Font(Font.SANS_SERIF, Font.PLAIN, 11));
+            n.setPaint(new Color(0x8b0000));
+            chart.addSubtitle(n);
+        }
+        return withCaution(chart);
     }
 
     /** A trace with the label it carries in a comparison. @param label legend label @param trace the trace */
