@@ -6,15 +6,28 @@ import java.util.Locale;
  * Writes a double with 7 significant digits exactly as {@code String.format(Locale.ROOT, "%.7g", v)} does (the
  * {@code %g} conversion of {@link java.util.Formatter}: the decimal digits of the double rounded half-up to 7
  * digits; plain notation when the rounded value is at least 1e-4 and below 1e7, otherwise {@code d.dddddde+XX}),
- * and zero (of either sign) as {@code 0}, without the formatter's per-call parsing. The digits come from
- * {@link Double#toString(double)}; when the digits after the seventh lie so near a half that another correct
- * digit generator could round the other way, the formatter itself is asked, so the text is always the
- * formatter's. Unitless: the caller converts to the display unit first.
+ * and zero (of either sign) as {@code 0}, without the formatter's per-call parsing. The digits come from the
+ * binary value scaled and rounded; where that could disagree with rounding the double's shortest decimal digits
+ * (a fraction near one half) from the digits of {@link Double#toString(double)}; and where even those lie so near
+ * a half that another correct digit generator could round the other way, from the formatter itself, so the text
+ * is always the formatter's. Unitless: the caller converts to the display unit first.
  */
 final class SignificantDigits {
 
     /** Significant digits written. */
     static final int DIGITS = 7;
+    /** Closest a scaled fraction may come to one half, in units of the seventh digit, for the fast path. */
+    private static final double HALF_MARGIN = 1e-4;
+    /** Marks a value the fast path leaves to the next one. */
+    private static final int NO_FAST_PATH = Integer.MIN_VALUE;
+    /** 10^0 .. 10^37 (exact up to 10^22). */
+    private static final double[] POWERS = new double[38];
+
+    static {
+        for (int k = 0; k < POWERS.length; k++) {
+            POWERS[k] = Double.parseDouble("1e" + k);
+        }
+    }
 
     private SignificantDigits() {
     }
@@ -34,8 +47,84 @@ final class SignificantDigits {
             out.append(String.format(Locale.ROOT, "%.7g", v));
             return;
         }
-        String s = Double.toString(v);
         char[] digits = new char[DIGITS];
+        int decExp = fastDigits(Math.abs(v), digits);
+        if (decExp == NO_FAST_PATH) {
+            decExp = toStringDigits(v, digits);
+            if (decExp == NO_FAST_PATH) {
+                out.append(String.format(Locale.ROOT, "%.7g", v));
+                return;
+            }
+        }
+        if (v < 0) {
+            out.append('-');
+        }
+        if (decExp >= -4 && decExp < DIGITS) {
+            plain(out, digits, decExp);
+        } else {
+            scientific(out, digits, decExp);
+        }
+    }
+
+    /**
+     * Rounds the binary value itself: scaled to [1e6, 1e7) it is rounded to the nearest integer, unless its
+     * fraction lies within {@link #HALF_MARGIN} of one half, where rounding the double's shortest decimal digits
+     * (as the formatter does) could go the other way; the scaling's own error is near 1e-9 of a unit.
+     *
+     * @param a a finite positive number
+     * @param digits output: the 7 digits
+     * @return the decimal exponent of the first digit, or {@link #NO_FAST_PATH}
+     */
+    private static int fastDigits(double a, char[] digits) {
+        if (!(a >= 1e-30 && a < 1e30)) {
+            return NO_FAST_PATH;
+        }
+        int e = (int) Math.floor(Math.log10(a));
+        double scaled = scale(a, DIGITS - 1 - e);
+        if (scaled >= 1e7) {
+            e++;
+            scaled = scale(a, DIGITS - 1 - e);
+        } else if (scaled < 1e6) {
+            e--;
+            scaled = scale(a, DIGITS - 1 - e);
+        }
+        if (!(scaled >= 1e6 && scaled < 1e7)) {
+            return NO_FAST_PATH;
+        }
+        long m = (long) scaled;
+        double fraction = scaled - m;
+        if (Math.abs(fraction - 0.5) < HALF_MARGIN) {
+            return NO_FAST_PATH;
+        }
+        if (fraction > 0.5) {
+            m++;
+        }
+        if (m == 10_000_000L) {
+            m = 1_000_000L;
+            e++;
+        }
+        for (int k = DIGITS - 1; k >= 0; k--) {
+            digits[k] = (char) ('0' + (int) (m % 10));
+            m /= 10;
+        }
+        return e;
+    }
+
+    /** @return a times 10^k, k from -37 to 37 */
+    private static double scale(double a, int k) {
+        return k >= 0 ? a * POWERS[k] : a / POWERS[-k];
+    }
+
+    /**
+     * Rounds the digits of {@link Double#toString(double)} half-up to 7, as the formatter rounds its digits.
+     *
+     * @param v a finite non-zero number
+     * @param digits output: the 7 digits
+     * @return the decimal exponent of the first digit, or {@link #NO_FAST_PATH} when the digits after the
+     *         seventh read 4999... or 5000...
+     */
+    private static int toStringDigits(double v, char[] digits) {
+        String s = Double.toString(v);
         int first = s.charAt(0) == '-' ? 1 : 0;
         int ePos = s.indexOf('E');
         int end = ePos < 0 ? s.length() : ePos;
@@ -74,8 +163,7 @@ final class SignificantDigits {
             digits[n++] = '0';
         }
         if (roundingDigit >= 0 && nearHalf(roundingDigit, tailAllNines, tailAllZeros)) {
-            out.append(String.format(Locale.ROOT, "%.7g", v));
-            return;
+            return NO_FAST_PATH;
         }
         if (roundingDigit >= 5) {
             int k = DIGITS - 1;
@@ -89,14 +177,7 @@ final class SignificantDigits {
                 digits[k]++;
             }
         }
-        if (first == 1) {
-            out.append('-');
-        }
-        if (decExp >= -4 && decExp < DIGITS) {
-            plain(out, digits, decExp);
-        } else {
-            scientific(out, digits, decExp);
-        }
+        return decExp;
     }
 
     /**

@@ -27,6 +27,18 @@ class SignificantDigitsTest {
     }
 
     @Test
+    void agreesWithTheFormatterOnGridTimesAndDecimalFractions() {
+        // Given the times of output grids (k * 1 ms, k * 0.25 ms) and values with few decimals, which sit exactly
+        // on or next to a half after scaling to seven digits
+        for (int k = 1; k < 100_000; k++) {
+            for (double v : new double[] {k * 1e-3, k * 2.5e-4, k / 8.0, k * 1e-7 + 0.5, k * 0.05e-7}) {
+                // Then the text is the formatter's
+                assertEquals(formatter(v), text(v), () -> "value " + v);
+            }
+        }
+    }
+
+    @Test
     void agreesWithTheFormatterAtRoundingAndNotationBoundaries() {
         // Given values that round across a power of ten, sit on a half, or straddle 1e-4 and 1e7
         double[] values = {9.9999995, 9.99999949, 0.99999995, 9999999.5, 9999999.4, 1e7, 1e-4, 9.9999995e-5,
