@@ -46,7 +46,7 @@ public final class RunCommand implements Callable<Integer> {
             List<ReducingValveMetrics> valves = ReducingValveMetrics.of(result, s.metricsFrom(), s.metricsTo(),
                     oscillations);
             String summary = summary(s, result, valves, oscillations);
-            folder.writeText("trace.csv", TraceCsv.format(result.trace(), s.units()));
+            folder.write("trace.csv", target -> TraceCsv.write(result.trace(), s.units(), target));
             folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
             FigureSet.write(s, result.trace(), valves, folder);
             folder.writeText("summary.txt", summary);

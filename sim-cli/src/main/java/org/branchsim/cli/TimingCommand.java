@@ -6,6 +6,7 @@ import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
+import java.lang.management.ThreadMXBean;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -41,8 +42,10 @@ import picocli.CommandLine.Parameters;
 
 /**
  * {@code branchsim timing} (formerly {@code bench}, still accepted for one release): runs scenarios several
- * times in one JVM after warm-up, per integration method, and writes wall times, work counters, accuracy against
- * a tight reference and peak heap to timing.json and timing.csv; then times a parallel sweep of variants of the first scenario.
+ * times in one JVM after warm-up, per integration method, each run on this one thread, and writes per run the
+ * wall time and the thread's CPU time (s), the work counters (every evaluation of the circuit equations counted,
+ * output sampling and energy recording included), accuracy against a tight reference and peak heap to
+ * timing.json and timing.csv; then times a parallel sweep of variants of the first scenario.
  */
 @Command(name = "timing", aliases = "bench", mixinStandardHelpOptions = true,
         description = "Measure run time, solver work, accuracy and memory per scenario and method; write timing.json "
@@ -140,10 +143,16 @@ public final class TimingCommand implements Callable<Integer> {
         root.put("warmup", warmup);
         ArrayNode results = root.putArray("results");
         StringBuilder csv = new StringBuilder("scenario,method,simulated_s,median_wall_s,min_wall_s,max_wall_s,"
-                + "simulated_per_wall,accepted_steps,rejected_steps,evaluations,jacobians,lu_factorisations,events,"
+                + "median_cpu_s,min_cpu_s,max_cpu_s,simulated_per_wall,accepted_steps,rejected_steps,evaluations,jacobians,lu_factorisations,events,"
                 + "max_pressure_error_rel_range,event_time_max_diff_s,peak_heap_MB\n");
-        w.printf("%-18s %-9s %9s %9s %9s %9s %8s %8s %10s %8s %8s %7s %10s %8s%n", "scenario", "method", "sim [s]",
-                "median[s]", "min [s]", "max [s]", "sim/wall", "steps", "rejected", "evals", "jacobian", "LU",
+        ThreadMXBean cpuClock = ManagementFactory.getThreadMXBean();
+        boolean cpuTimed = cpuClock.isCurrentThreadCpuTimeSupported();
+        if (cpuTimed && !cpuClock.isThreadCpuTimeEnabled()) {
+            cpuClock.setThreadCpuTimeEnabled(true);
+        }
+        root.put("cpuTimeMeasured", cpuTimed);
+        w.printf("%-18s %-9s %9s %9s %9s %9s %9s %8s %8s %8s %8s %8s %10s %8s %8s %7s %8s%n", "scenario", "method", "sim [s]",
+                "wall med", "wall min", "wall max", "cpu med", "cpu min", "cpu max", "sim/wall", "steps", "rejected", "evals", "jacobian", "LU",
                 "err/range", "heap MB");
         for (Path file : files) {
             Scenario base = ScenarioLoader.load(file);
@@ -163,21 +172,32 @@ public final class TimingCommand implements Callable<Integer> {
                     Simulator.run(base.circuit(), s);
                 }
                 double[] walls = new double[runs];
+                double[] cpus = new double[runs];
                 SimulationResult last = null;
                 for (int i = 0; i < runs; i++) {
+                    long c0 = cpuTimed ? cpuClock.getCurrentThreadCpuTime() : 0L;
                     long t0 = System.nanoTime();
                     last = Simulator.run(base.circuit(), s);
                     walls[i] = (System.nanoTime() - t0) * 1e-9;
+                    cpus[i] = cpuTimed ? (cpuClock.getCurrentThreadCpuTime() - c0) * 1e-9 : Double.NaN;
                 }
                 double heap = peakHeapMegabytes(base, s);
+                ObjectNode o = results.addObject();
+                ArrayNode perRun = o.putArray("perRun");
+                for (int i = 0; i < runs; i++) {
+                    ObjectNode r = perRun.addObject();
+                    r.put("wall_s", walls[i]);
+                    MetricsReport.putFinite(r, "cpu_s", cpus[i]);
+                }
                 Arrays.sort(walls);
+                Arrays.sort(cpus);
                 double median = walls[walls.length / 2];
+                double cpuMedian = cpus[cpus.length / 2];
                 SolverStatistics st = last.statistics();
                 double err = reference == null ? Double.NaN
                         : TraceComparison.maxErrorOverRange(last.trace(), reference.trace(), Dimension.PRESSURE);
                 double eventDiff = reference == null ? Double.NaN
                         : TraceComparison.eventTimeDifference(last.events(), reference.events());
-                ObjectNode o = results.addObject();
                 o.put("scenario", base.name());
                 o.put("method", st.method());
                 o.put("simulated_s", s.endTime());
@@ -185,6 +205,9 @@ public final class TimingCommand implements Callable<Integer> {
                 o.put("medianWall_s", median);
                 o.put("minWall_s", walls[0]);
                 o.put("maxWall_s", walls[walls.length - 1]);
+                MetricsReport.putFinite(o, "medianCpu_s", cpuMedian);
+                MetricsReport.putFinite(o, "minCpu_s", cpus[0]);
+                MetricsReport.putFinite(o, "maxCpu_s", cpus[cpus.length - 1]);
                 o.put("simulatedPerWall", s.endTime() / median);
                 o.put("acceptedSteps", st.acceptedSteps());
                 o.put("rejectedSteps", st.rejectedSteps());
@@ -195,15 +218,16 @@ public final class TimingCommand implements Callable<Integer> {
                 MetricsReport.putFinite(o, "maxPressureErrorOverRange", err);
                 MetricsReport.putFinite(o, "eventTimeMaxDifference_s", eventDiff);
                 o.put("peakHeap_MB", heap);
-                csv.append(String.format(Locale.ROOT, "%s,%s,%g,%.6f,%.6f,%.6f,%.1f,%d,%d,%d,%d,%d,%d,%s,%s,%.1f%n",
+                csv.append(String.format(Locale.ROOT, "%s,%s,%g,%.6f,%.6f,%.6f,%s,%s,%s,%.1f,%d,%d,%d,%d,%d,%d,%s,%s,%.1f%n",
                         base.name(), m.name().toLowerCase(Locale.ROOT), s.endTime(), median, walls[0],
-                        walls[walls.length - 1], s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),
+                        walls[walls.length - 1], seconds(cpuMedian), seconds(cpus[0]), seconds(cpus[cpus.length - 1]),
+                        s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),
                         st.evaluations(), st.jacobians(), st.factorisations(), st.totalEvents(),
                         Double.isNaN(err) ? "" : String.format(Locale.ROOT, "%.3g", err),
                         Double.isNaN(eventDiff) ? "" : String.format(Locale.ROOT, "%.3g", eventDiff), heap));
-                w.printf(Locale.ROOT, "%-18s %-9s %9.3g %9.4f %9.4f %9.4f %8.1f %8d %8d %10d %8d %8d %7.2g %8.1f%n",
+                w.printf(Locale.ROOT, "%-18s %-9s %9.3g %9.4f %9.4f %9.4f %9.4f %8.4f %8.4f %8.1f %8d %8d %10d %8d %8d %7.2g %8.1f%n",
                         base.name(), m.name().toLowerCase(Locale.ROOT), s.endTime(), median, walls[0],
-                        walls[walls.length - 1], s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),
+                        walls[walls.length - 1], cpuMedian, cpus[0], cpus[cpus.length - 1], s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),
                         st.evaluations(), st.jacobians(), st.factorisations(), err, heap);
                 w.flush();
             }
@@ -215,6 +239,11 @@ public final class TimingCommand implements Callable<Integer> {
         folder.writeText("timing.csv", csv.toString());
         folder.commit();
         w.printf("results written to %s (timing.json, timing.csv)%n", folder.dir());
+    }
+
+    /** @return seconds with 6 decimals for timing.csv, empty when the CPU clock is not available */
+    private static String seconds(double s) {
+        return Double.isNaN(s) ? "" : String.format(Locale.ROOT, "%.6f", s);
     }
 
     /** @return the settings with the --end-time override, checked against the scenario's output grid */

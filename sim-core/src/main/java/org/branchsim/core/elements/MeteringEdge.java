@@ -72,6 +72,7 @@ public record MeteringEdge(double spoolDiameter, double width, double openLength
 
     /** @return steady flow force, N, pushing the spool towards closing */
     public double flowForce(double s, double dp) {
-        return FlowForce.closingForce(cd, FlowForce.VELOCITY_COEFFICIENT, area(s), dp, FlowForce.SPOOL_JET_ANGLE);
+        return FlowForce.closingForceAtCosine(cd, FlowForce.VELOCITY_COEFFICIENT, area(s), dp,
+                FlowForce.SPOOL_JET_COSINE);
     }
 }

@@ -21,6 +21,8 @@ public final class PoppetGeometry {
     private final double maxLift;
     private final double cd;
     private final PoppetSeat seat;
+    /** cos of the seat's jet angle, computed once. */
+    private final double jetCosine;
 
     /**
      * @param seatDiameter seat diameter, m
@@ -43,6 +45,7 @@ public final class PoppetGeometry {
         this.maxLift = maxLift;
         this.cd = cd;
         this.seat = new PoppetSeat(seatDiameter, coneAngle);
+        this.jetCosine = Math.cos(seat.jetAngle());
     }
 
     /** @return seat diameter, m */
@@ -103,7 +106,7 @@ public final class PoppetGeometry {
 
     /** @return steady flow force closing the poppet, N; the jet leaves at half the cone angle to the axis */
     public double flowForce(double lift, double dp) {
-        return FlowForce.closingForce(cd, FlowForce.VELOCITY_COEFFICIENT, area(lift), dp, seat.jetAngle());
+        return FlowForce.closingForceAtCosine(cd, FlowForce.VELOCITY_COEFFICIENT, area(lift), dp, jetCosine);
     }
 
     /** @return a copy with a different preload, N */

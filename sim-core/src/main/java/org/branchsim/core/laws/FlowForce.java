@@ -10,6 +10,8 @@ public final class FlowForce {
 
     /** Jet angle of a sharp-edged spool port, rad (69 deg, Merritt 1967, from memory). */
     public static final double SPOOL_JET_ANGLE = Math.toRadians(69.0);
+    /** cos({@link #SPOOL_JET_ANGLE}), computed once. */
+    public static final double SPOOL_JET_COSINE = Math.cos(SPOOL_JET_ANGLE);
     /** Velocity coefficient of a sharp-edged orifice jet (Merritt 1967). */
     public static final double VELOCITY_COEFFICIENT = 0.98;
 
@@ -25,6 +27,20 @@ public final class FlowForce {
      * @return closing force, N (never negative)
      */
     public static double closingForce(double cd, double cv, double area, double dp, double jetAngle) {
-        return 2.0 * cd * cv * area * Math.abs(dp) * Math.cos(jetAngle);
+        return closingForceAtCosine(cd, cv, area, dp, Math.cos(jetAngle));
+    }
+
+    /**
+     * The same law with the jet angle's cosine computed once by the caller (the hot path of an evaluation).
+     *
+     * @param cd discharge coefficient
+     * @param cv velocity coefficient
+     * @param area metering area, m^2
+     * @param dp pressure difference across the opening (absolute value is used), Pa
+     * @param jetCosine cosine of the jet angle to the member's axis
+     * @return closing force, N (never negative)
+     */
+    public static double closingForceAtCosine(double cd, double cv, double area, double dp, double jetCosine) {
+        return 2.0 * cd * cv * area * Math.abs(dp) * jetCosine;
     }
 }

@@ -8,7 +8,8 @@ import java.util.Map;
  * @param method integration method name
  * @param acceptedSteps steps accepted
  * @param rejectedSteps steps tried and rejected by the error control
- * @param evaluations derivative (right-hand side) evaluations, including those for Jacobians
+ * @param evaluations evaluations of the circuit equations, every one counted: right-hand sides for steps, stages
+ *        and Jacobians, and signal and power samples for the output grid and the energy accounts
  * @param jacobians Jacobian evaluations (0 for explicit methods)
  * @param factorisations LU factorisations (0 for explicit methods)
  * @param events events handled, by kind (seat, stop, contact, corner, schedule)

@@ -32,6 +32,7 @@ final class RunEngine {
     private final Evaluation viewWork;
     private final Evaluation editWork;
     private final Map<StateSlot, Integer> positions;
+    private long evaluations;
 
     /** @param model the model to run; every member starts free, the impulse ledger empty */
     RunEngine(CircuitModel model) {
@@ -74,12 +75,14 @@ final class RunEngine {
      * @param yDot output: derivative, SI per second
      */
     void derivatives(double t, double[] y, double[] yDot) {
+        evaluations++;
         model.evaluate(work, t, y, yDot, null, null);
     }
 
     /** @return the values of all signals at (t, y), SI, in the model's signal order */
     double[] sampleSignals(double t, double[] y) {
         double[] out = new double[model.signals().size()];
+        evaluations++;
         model.evaluate(work, t, y, new double[y.length], out, null);
         return out;
     }
@@ -87,8 +90,18 @@ final class RunEngine {
     /** @return the power flowing into each energy account at (t, y), W, in the model's account order */
     double[] samplePowers(double t, double[] y) {
         double[] out = new double[model.accounts().size()];
+        evaluations++;
         model.evaluate(work, t, y, new double[y.length], null, out);
         return out;
+    }
+
+    /**
+     * @return every full evaluation of the model's equations by this engine so far: derivatives for the
+     *         integrator (steps, stages, Jacobian columns), signal samples for the output grid and power samples
+     *         for the energy accounts (switching-function views evaluate no equations and are not counted)
+     */
+    long evaluations() {
+        return evaluations;
     }
 
     /** @return a read-only view of (t, y) for switching functions; valid until the next call of this method */

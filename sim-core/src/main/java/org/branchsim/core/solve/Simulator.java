@@ -103,7 +103,7 @@ public final class Simulator {
             eventCounts.merge(r.kind(), 1, Integer::sum);
         }
         SolverStatistics stats = new SolverStatistics(IntegratorFactory.describe(settings.method()),
-                sampler.steps(), IntegratorFactory.rejected(integrator), integrator.getEvaluations(),
+                sampler.steps(), IntegratorFactory.rejected(integrator), engine.evaluations(),
                 IntegratorFactory.jacobians(integrator), IntegratorFactory.factorisations(integrator),
                 eventCounts, wall, settings.endTime());
         return new SimulationResult(new RunDescription(model, settings, engine.heldMembers()), trace, stats,

@@ -87,6 +87,7 @@ class LeakageAndSeatTest {
         // Q = 69.7 L/min (orifice equation, rho = 870)
         double area = 62.83e-3 * 0.2e-3;
         assertEquals(53.8, FlowForce.closingForce(0.61, 0.98, area, 100e5, FlowForce.SPOOL_JET_ANGLE), 0.1);
+        assertEquals(53.8, FlowForce.closingForceAtCosine(0.61, 0.98, area, 100e5, FlowForce.SPOOL_JET_COSINE), 0.1);
         // the metering edge the reducing valves use, opened 0.2 mm on its full periphery, gives both numbers
         MeteringEdge edge = new MeteringEdge(10e-3, 62.83e-3, 0.5e-3, 0.0, 0.0, 0.61);
         double s = 0.2e-3;
