@@ -30,6 +30,10 @@ class CharacteristicCommandTest {
     void regulationDemoWritesBothValvesAndThePilotValveDroopsLess(@TempDir Path dir) throws IOException {
         RunCommandTest.Outcome o = RunCommandTest.run("characteristic", DEMO, "--out", dir.toString());
         assertEquals(0, o.code(), o.err());
+        // the demo's schedule: supply up over 1..3 s and down over 3.2..3.5 s; both demands up over 4..4.5 s and
+        // down over 5..5.2 s (merged, one stretch per direction)
+        assertTrue(o.out().contains("from 4 ramp stretch(es): supply pressure rising 1.000..3.000 s, supply pressure "
+                + "falling 3.200..3.500 s, demand rising 4.000..4.500 s, demand falling 5.000..5.200 s"), o.out());
         assertTrue(Files.size(dir.resolve("characteristic-pilotReducer.png")) > 0);
         assertTrue(Files.size(dir.resolve("characteristic-directReducer.png")) > 0);
         List<String> csv = Files.readAllLines(dir.resolve("characteristic.csv"));

@@ -140,7 +140,7 @@ public final class CharacteristicChart {
                 ValveCharacteristic.Sample::outlet, pu), c.id() + ".q (main flow) [" + qu.symbol() + "]",
                 c.id() + ".p.out [" + pu.symbol() + "]");
         p.addRangeMarker(setting(c, pu), Layer.FOREGROUND);
-        include(p.getRangeAxis(), DatasetUtils.findRangeBounds(p.getDataset()), pu.fromSi(c.setting()));
+        include(p.getRangeAxis(), DatasetUtils.findRangeBounds(p.getDataset(), false), pu.fromSi(c.setting()));
         return p;
     }
 
@@ -149,7 +149,7 @@ public final class CharacteristicChart {
                 ValveCharacteristic.Sample::outlet, pu), "inlet pressure [" + pu.symbol() + "]",
                 c.id() + ".p.out [" + pu.symbol() + "]");
         p.addRangeMarker(setting(c, pu), Layer.FOREGROUND);
-        include(p.getRangeAxis(), DatasetUtils.findRangeBounds(p.getDataset()), pu.fromSi(c.setting()));
+        include(p.getRangeAxis(), DatasetUtils.findRangeBounds(p.getDataset(), false), pu.fromSi(c.setting()));
         return p;
     }
 
@@ -167,7 +167,7 @@ public final class CharacteristicChart {
         m.setLabelAnchor(RectangleAnchor.BOTTOM_RIGHT);
         m.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
         p.addDomainMarker(m, Layer.FOREGROUND);
-        include(p.getDomainAxis(), DatasetUtils.findDomainBounds(p.getDataset()), pu.fromSi(c.setting()));
+        include(p.getDomainAxis(), DatasetUtils.findDomainBounds(p.getDataset(), false), pu.fromSi(c.setting()));
         return p;
     }
 
