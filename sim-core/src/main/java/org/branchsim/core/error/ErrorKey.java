@@ -86,7 +86,9 @@ public enum ErrorKey {
     /** Writing an output file failed. */
     OUTPUT_FAILED(false, "cannot write output {0}: {1}"),
     /** Every variant of a study failed, so the study has no result (nothing is written). */
-    STUDY_FAILED(false, "all {0} variants failed, nothing written; the first failure (variant {1}): {2}");
+    STUDY_FAILED(false, "all {0} variants failed, nothing written; the first failure (variant {1}): {2}"),
+    /** A characteristic was asked of a scenario that lacks what it needs (a reducing valve, a ramp). */
+    NOTHING_TO_CHARACTERISE(true, "{0}: no characteristic can be drawn: {1}");
 
     private final boolean inputError;
     private final String pattern;
