@@ -3,6 +3,7 @@ package org.branchsim.cli;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
@@ -69,6 +70,30 @@ public final class FigureSet {
                     : dims.get(0) == Dimension.VOLUME_FLOW ? SignalPanels.bySize(trace, drawn, fitFrom)
                     : SignalPanels.limited(drawn);
             out.write(file, p -> TraceCharts.panels(trace, panels, g.title(), scenario.units(), fitFrom, p));
+        }
+    }
+
+    /** Cycles shown in an oscillation figure. */
+    static final int OSCILLATION_CYCLES = 6;
+
+    /**
+     * Writes one figure per oscillation found ({@code oscillation-<k>-<signal>.png}): its strongest signal over the
+     * last {@link #OSCILLATION_CYCLES} cycles of the window where it is strongest, so that the waveform (and, for
+     * chatter, the flat stretches where a member sits on its seat) can be seen.
+     */
+    public static void writeOscillations(Scenario scenario, Trace trace, List<OscillationFinding> findings,
+                                         OutputFolder out) {
+        int k = 0;
+        for (OscillationFinding f : findings) {
+            k++;
+            String signal = f.dominant().signal();
+            double to = f.window().to();
+            double from = Math.max(f.window().from(), to - OSCILLATION_CYCLES / f.frequency());
+            String title = String.format(Locale.ROOT, "%s: %s of %s at %.1f Hz, last %d cycles before %.3f s",
+                    scenario.name(), f.kind().label(), f.name(), f.frequency(), OSCILLATION_CYCLES, to);
+            out.write(String.format(Locale.ROOT, "oscillation-%d-%s.png", k, slug(signal)),
+                    p -> TraceCharts.compare(List.of(new TraceCharts.Labelled("as run", trace)), signal, title,
+                            scenario.units(), p, from, to));
         }
     }
 

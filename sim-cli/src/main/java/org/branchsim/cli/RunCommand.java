@@ -49,6 +49,7 @@ public final class RunCommand implements Callable<Integer> {
             folder.write("trace.csv", target -> TraceCsv.write(result.trace(), s.units(), target));
             folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
             FigureSet.write(s, result.trace(), valves, folder);
+            FigureSet.writeOscillations(s, result.trace(), oscillations, folder);
             folder.writeText("summary.txt", summary);
             folder.commit();
             PrintWriter w = spec.commandLine().getOut();

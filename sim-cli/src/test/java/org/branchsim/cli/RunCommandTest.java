@@ -35,6 +35,17 @@ class RunCommandTest {
         return new Outcome(code, out.toString(), err.toString());
     }
 
+    /** A run that oscillates gets a figure of the last few cycles of each oscillation, with the waveform's samples. */
+    @Test
+    void anOscillationGetsAFigureOfItsLastCycles(@TempDir Path dir) throws IOException {
+        Outcome o = run("run", SCENARIOS.resolve("gripper-chatter.json").toString(), "--out", dir.toString());
+        assertEquals(0, o.code(), o.err());
+        Path figure = dir.resolve("oscillation-1-reducer-pilot-x.png");
+        assertTrue(Files.exists(figure), o.out());
+        assertTrue(ImageIO.read(figure.toFile()) != null);
+        assertTrue(o.out().contains("oscillation: chatter"), o.out());
+    }
+
     @Test
     void feedStallDemoWritesTraceMetricsAndFigures(@TempDir Path dir) throws IOException {
         Outcome o = run("run", SCENARIOS.resolve("feed-stall.json").toString(), "--out", dir.toString());
