@@ -1,24 +1,18 @@
 package org.branchsim.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.atomic.AtomicReference;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /** {@code branchsim characteristic}: outputs on the regulation demo, the droop comparison, refusals. */
 class CharacteristicCommandTest {
@@ -82,15 +76,6 @@ class CharacteristicCommandTest {
 
     /** @return the key of the exception a command line throws */
     private static ErrorKey keyOf(String... args) {
-        AtomicReference<Exception> seen = new AtomicReference<>();
-        CommandLine cl = new CommandLine(new BranchsimMain());
-        cl.setOut(new PrintWriter(new StringWriter()));
-        cl.setErr(new PrintWriter(new StringWriter()));
-        cl.setExecutionExceptionHandler((ex, c, parse) -> {
-            seen.set(ex);
-            return BranchsimMain.BAD_INPUT;
-        });
-        cl.execute(args);
-        return assertInstanceOf(BranchsimException.class, seen.get(), String.join(" ", args)).key();
+        return ErrorKeysTest.thrownBy(args).key();
     }
 }

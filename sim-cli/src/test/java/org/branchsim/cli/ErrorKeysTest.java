@@ -30,6 +30,16 @@ class ErrorKeysTest {
 
     /** Runs a command line and returns what it threw, checking that {@link BranchsimMain} gives the key's exit code. */
     private static BranchsimException raised(ErrorKey key, String... args) {
+        BranchsimException e = thrownBy(args);
+        assertSame(key, e.key(), e.getMessage());
+        RunCommandTest.Outcome o = RunCommandTest.run(args);
+        assertEquals(key.isInputError() ? BranchsimMain.BAD_INPUT : BranchsimMain.SIMULATION_FAILED, o.code(), o.err());
+        assertTrue(o.err().contains(e.getMessage()), o.err());
+        return e;
+    }
+
+    /** @return the exception a command line throws, caught before the command line turns it into an exit code */
+    static BranchsimException thrownBy(String... args) {
         AtomicReference<Exception> seen = new AtomicReference<>();
         CommandLine cl = new CommandLine(new BranchsimMain());
         cl.setOut(new PrintWriter(new StringWriter()));
@@ -39,12 +49,7 @@ class ErrorKeysTest {
             return BranchsimMain.BAD_INPUT;
         });
         cl.execute(args);
-        BranchsimException e = assertInstanceOf(BranchsimException.class, seen.get(), String.join(" ", args));
-        assertSame(key, e.key(), e.getMessage());
-        RunCommandTest.Outcome o = RunCommandTest.run(args);
-        assertEquals(key.isInputError() ? BranchsimMain.BAD_INPUT : BranchsimMain.SIMULATION_FAILED, o.code(), o.err());
-        assertTrue(o.err().contains(e.getMessage()), o.err());
-        return e;
+        return assertInstanceOf(BranchsimException.class, seen.get(), String.join(" ", args));
     }
 
     @Test

@@ -4,9 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
+import org.branchsim.core.docs.GeneratedSections;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -16,19 +14,9 @@ import org.junit.jupiter.api.Test;
  */
 class FieldReferenceDocTest {
 
-    private static final Path DOC = Path.of("..", "docs", "scenario-format.md");
-
-    private static String between(String text, String begin, String end) {
-        int a = text.indexOf(begin);
-        int b = text.indexOf(end);
-        assertTrue(a >= 0 && b > a, "markers " + begin + " / " + end + " in " + DOC);
-        return text.substring(text.indexOf('\n', a) + 1, b);
-    }
-
     @Test
     void theDocumentCarriesTheGeneratedReference() throws IOException {
-        String doc = Files.readString(DOC, StandardCharsets.UTF_8);
-        assertEquals(FieldReference.markdown(), between(doc, "<!-- fields:begin", "<!-- fields:end"));
+        assertEquals(FieldReference.markdown(), GeneratedSections.of("fields"));
     }
 
     @Test
