@@ -4,7 +4,7 @@ package org.branchsim.core.solve.stiff;
  * LU factorisation with partial pivoting of a small dense matrix, in place, for the repeated solves of a
  * linearly implicit method. Factorise once per step size, solve once per stage.
  */
-final class DenseLu {
+final class DenseLu implements StepMatrixSolver {
     private final int n;
     private final double[][] lu;
     private final int[] pivot;
@@ -20,7 +20,8 @@ final class DenseLu {
      *
      * @return false when the matrix is singular to working precision
      */
-    boolean factorise(double diagonal, double[][] jacobian) {
+    @Override
+    public boolean factorise(double diagonal, double[][] jacobian) {
         for (int i = 0; i < n; i++) {
             double[] row = lu[i];
             double[] jr = jacobian[i];
@@ -67,7 +68,8 @@ final class DenseLu {
     }
 
     /** Solves in place: on return {@code b} holds x with (diagonal I - J) x = b. */
-    void solve(double[] b) {
+    @Override
+    public void solve(double[] b) {
         for (int k = 0; k < n; k++) {
             int p = pivot[k];
             if (p != k) {

@@ -55,6 +55,8 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     private final SparsityPattern pattern;
     private final int maxJacobianAge;
     private java.util.function.DoublePredicate timeDependent = t -> true;
+    private JacobianSource jacobianSource;
+    private StepMatrixSolver linearSolver;
     private long accepted;
     private long rejected;
     private long jacobians;
@@ -82,6 +84,23 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
      */
     public void setTimeDependence(java.util.function.DoublePredicate dependsOnTimeAt) {
         this.timeDependent = dependsOnTimeAt;
+    }
+
+    /**
+     * Takes the Jacobian from {@code source} instead of estimating it by finite differences (null restores the
+     * differences). The time derivative f_t is still estimated by one difference where the equations depend on
+     * time.
+     */
+    public void setJacobianSource(JacobianSource source) {
+        this.jacobianSource = source;
+    }
+
+    /**
+     * Solves the stages' linear systems with {@code solver} (sized for this integrator's equations) instead of
+     * dense LU; null restores dense LU.
+     */
+    public void setLinearSolver(StepMatrixSolver solver) {
+        this.linearSolver = solver;
     }
 
     /** @return steps accepted in the last integration */
@@ -128,7 +147,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         }
         double[][] jac = new double[n][n];
         double[] ft = new double[n];
-        DenseLu lu = new DenseLu(n);
+        StepMatrixSolver lu = linearSolver != null ? linearSolver : new DenseLu(n);
         double[] k1 = new double[n];
         double[] k2 = new double[n];
         double[] k3 = new double[n];
@@ -209,7 +228,8 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     }
 
     /** Runs the four stages; returns the scaled error norm (NaN or infinity when the step failed). */
-    private double stages(double t, double[] y, double[] f0, double[] ft, double h, DenseLu lu, double[] k1,
+    private double stages(double t, double[] y, double[] f0, double[] ft, double h, StepMatrixSolver lu,
+                          double[] k1,
                           double[] k2, double[] k3, double[] k4, double[] yStage, double[] y1) {
         int n = y.length;
         for (int i = 0; i < n; i++) {
@@ -298,15 +318,19 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     private void estimateJacobian(DifferenceJacobian differences, double t, double[] y, double[] f0, double h,
                                   double[][] jac, double[] ft) {
         int n = y.length;
-        differences.estimate(yp -> computeDerivatives(t, yp), y, f0, (j, quotient) -> {
-            java.util.BitSet rows = pattern.rows(j);
-            for (int i = 0; i < n; i++) {
-                jac[i][j] = 0.0;
-            }
-            for (int i = rows.nextSetBit(0); i >= 0; i = rows.nextSetBit(i + 1)) {
-                jac[i][j] = quotient.applyAsDouble(i);
-            }
-        });
+        if (jacobianSource != null) {
+            jacobianSource.jacobian(t, y, f0, jac);
+        } else {
+            differences.estimate(yp -> computeDerivatives(t, yp), y, f0, (j, quotient) -> {
+                java.util.BitSet rows = pattern.rows(j);
+                for (int i = 0; i < n; i++) {
+                    jac[i][j] = 0.0;
+                }
+                for (int i = rows.nextSetBit(0); i >= 0; i = rows.nextSetBit(i + 1)) {
+                    jac[i][j] = quotient.applyAsDouble(i);
+                }
+            });
+        }
         if (timeDependent.test(t)) {
             double dt = SQRT_EPS * FastMath.max(FastMath.abs(t), FastMath.abs(h));
             double[] fT = computeDerivatives(t + dt, y);
