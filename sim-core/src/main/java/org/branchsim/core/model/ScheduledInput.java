@@ -6,16 +6,47 @@ import java.util.TreeSet;
 import org.branchsim.core.units.Dimension;
 
 /**
- * A time-scheduled input of an element (a valve opening, a pump speed, a load force): a piecewise-linear
- * function of time made of ramps from the value at their start to a target. A ramp of zero duration is a
- * step. The solver places an event at every corner so that no step straddles one. Ramps are added while the
+ * A time-scheduled input of an element (a valve opening, a pump speed, a load force): a function of time made
+ * of ramps from the value at their start to a target, each either linear or an S-curve (cubic smoothstep,
+ * {@link Shape#S_CURVE}). A ramp of zero duration is a step; a table of values against time is a chain of
+ * linear ramps. The solver places an event at every corner so that no step straddles one. Ramps are added while the
  * circuit is assembled; building the {@link CircuitModel} fixes them, so every run of the model sees the same
  * schedule.
  */
 public final class ScheduledInput {
 
-    /** One change: from {@code start} (s), move linearly to {@code target} (SI) in {@code duration} (s). */
-    public record Ramp(double start, double duration, double target) {
+    /** How a ramp moves from its start value to its target. */
+    public enum Shape {
+        /** At constant rate: v = v0 + (v1 - v0) f, f = (t - t0) / duration. */
+        LINEAR,
+        /**
+         * Cubic smoothstep, v = v0 + (v1 - v0) (3 f^2 - 2 f^3): zero rate at both ends, so the input and its rate
+         * are continuous; the peak rate is 1.5 times the linear ramp's, at mid-ramp.
+         */
+        S_CURVE;
+
+        /**
+         * @param f fraction of the ramp's duration elapsed, 0 to 1
+         * @return fraction of the change made, 0 to 1
+         */
+        public double progress(double f) {
+            return this == LINEAR ? f : f * f * (3.0 - 2.0 * f);
+        }
+    }
+
+    /**
+     * One change: from {@code start} (s), move to {@code target} (SI) in {@code duration} (s) along a shape.
+     *
+     * @param start start time, s
+     * @param duration duration, s (0: a step)
+     * @param target value at the end, SI
+     * @param shape linear or S-curve
+     */
+    public record Ramp(double start, double duration, double target, Shape shape) {
+        /** A linear ramp (or a step when the duration is 0). */
+        public Ramp(double start, double duration, double target) {
+            this(start, duration, target, Shape.LINEAR);
+        }
     }
 
     private final String name;
@@ -24,6 +55,7 @@ public final class ScheduledInput {
     private final List<Ramp> ramps = new ArrayList<>();
     private double[] times = new double[0];
     private double[] values = new double[0];
+    private Shape[] shapes = new Shape[0];
     private boolean fixed;
 
     /**
@@ -70,8 +102,10 @@ public final class ScheduledInput {
     private void rebuild() {
         List<Double> t = new ArrayList<>();
         List<Double> v = new ArrayList<>();
+        List<Shape> s = new ArrayList<>();
         double current = initial;
         for (Ramp r : ramps) {
+            s.add(r.shape());
             t.add(r.start());
             v.add(current);
             t.add(r.start() + r.duration());
@@ -80,6 +114,7 @@ public final class ScheduledInput {
         }
         times = t.stream().mapToDouble(Double::doubleValue).toArray();
         values = v.stream().mapToDouble(Double::doubleValue).toArray();
+        shapes = s.toArray(new Shape[0]);
     }
 
     /**
@@ -97,7 +132,7 @@ public final class ScheduledInput {
             if (t >= t1) {
                 result = values[i + 1];
             } else {
-                double f = (t - t0) / (t1 - t0);
+                double f = shapes[i / 2].progress((t - t0) / (t1 - t0));
                 result = values[i] + f * (values[i + 1] - values[i]);
             }
         }
