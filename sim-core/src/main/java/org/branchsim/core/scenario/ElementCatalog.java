@@ -19,7 +19,10 @@ public final class ElementCatalog {
             CylinderType.DESCRIPTOR,
             PilotReducingValveType.DESCRIPTOR,
             DirectReducingValveType.DESCRIPTOR,
-            MotorType.DESCRIPTOR));
+            MotorType.DESCRIPTOR,
+            AccumulatorType.DESCRIPTOR,
+            HydraulicLineType.DESCRIPTOR,
+            PilotReliefValveType.DESCRIPTOR));
 
     private final List<ElementDescriptor<?>> types;
 

@@ -49,9 +49,12 @@ public final class FieldReference {
         }
 
         sb.append("\n## `schedule`\nA list of changes, each `{ \"at\": \"1.2 s\", \"set\": \"<element>.<input>\", \"to\": "
-                + "<value>, \"over\": \"50 ms\" }`: from time `at`, the input moves linearly from its current value to "
-                + "`to` in `over`. Changes of one input must not overlap. Every corner is an event for the solver.\n");
-        table(sb, ScheduleSection.ITEM, "change", false);
+                + "<value>, \"over\": \"50 ms\" }`: from time `at`, the input moves from its current value to `to` in "
+                + "`over`, linearly or along an S-curve (`\"shape\": \"s-curve\"`, cubic smoothstep); or "
+                + "`{ \"set\": ..., \"table\": [ { \"t\": \"0 s\", \"value\": ... }, ... ] }`, values against time "
+                + "joined by straight lines. Changes of one input must not overlap. Every corner is an event for the "
+                + "solver.\n");
+        table(sb, ScheduleSection.ITEM, "`schedule`", true);
 
         section(sb, "solver", SolverSection.SPEC, "");
         section(sb, "outputs", OutputsSection.SPEC, "");
