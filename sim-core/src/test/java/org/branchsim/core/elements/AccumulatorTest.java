@@ -123,7 +123,7 @@ class AccumulatorTest {
         assertEquals(24.4, natural, 0.05);
         // ... slowed by the neck's laminar resistance R = 128 mu L / (pi d^4) (Hagen-Poiseuille, White, Fluid
         // Mechanics) to the damped frequency f sqrt(1 - zeta^2), zeta = (R / 2) sqrt(C / I) (second-order system,
-        // Merritt 1967 ch. 5): zeta = 0.21 here
+        // from memory): zeta = 0.21 here
         double resistance = 128 * oil.dynamicViscosity() * length / (Math.PI * Math.pow(diameter, 4));
         double zeta = 0.5 * resistance * Math.sqrt(compliance / inertance);
         double expected = natural * Math.sqrt(1 - zeta * zeta);

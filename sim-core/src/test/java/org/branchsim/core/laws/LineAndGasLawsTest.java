@@ -70,6 +70,11 @@ class LineAndGasLawsTest {
         assertEquals(0.1809e-3, GasSpring.polytropicVolume(p0, 0.5e-3, p, 1.0), 0.0001e-3);
         assertEquals(0.2419e-3, GasSpring.polytropicVolume(p0, 0.5e-3, p, 1.4), 0.0001e-3);
         assertEquals(p, GasSpring.polytropicPressure(p0, 0.5e-3, 0.2419e-3, 1.4), p * 1e-3); // V rounded to 4 digits
+        // and the gas spring n p A^2 / V on the neck's fluid mass rho A L of a 4 mm x 50 mm neck rings at 24.4 Hz
+        // (Helmholtz resonator, from memory; REFERENCES.md worked number)
+        double area = 0.25 * Math.PI * 16e-6;
+        double k = GasSpring.stiffness(1.4, p, area, 0.2419e-3);
+        assertEquals(24.4, Math.sqrt(k / (RHO * area * 0.05)) / (2 * Math.PI), 0.05);
         // and the ideal gas law p V / T = const (Boyle, Gay-Lussac): twice the temperature, twice the pressure
         assertEquals(2 * p0, GasSpring.idealGasPressure(p0, 0.5e-3, 300.0, 0.5e-3, 600.0), 1e-6);
     }
