@@ -4,14 +4,26 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertSame;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.List;
+import java.util.stream.Stream;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.units.Dimension;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * A trace gives back every sample it was given, across the chunks it stores them in. The samples are an analytic
  * pressure history, p(t) = p0 + dp sin(2 pi f t), and its exact time derivative, computed here with java.lang.Math
- * at every grid time, so the expected values do not come from the code under test.
+ * at every grid time, so the expected values do not come from the code under test. A trace whose memory budget is
+ * exceeded keeps the later samples in a temporary file and gives back the same numbers, bit for bit.
  */
 class TraceTest {
 
@@ -52,6 +64,84 @@ class TraceTest {
         assertEquals(rate(1.5), trace.valueAt("line.rate", 1.5 + 0.2 * INTERVAL));
         assertThrows(IndexOutOfBoundsException.class, () -> trace.time(SAMPLES));
         assertThrows(IllegalArgumentException.class, () -> trace.add(0.0, new double[3]));
+    }
+
+    @Test
+    void samplesBeyondTheMemoryBudgetComeBackFromTheFileAndTheFileIsDeletedOnClose(@TempDir Path dir)
+            throws IOException {
+        // Given a budget of one chunk (4096 rows of 4 doubles), 20 000 samples of p(t), dp/dt and p(t) again
+        Trace trace = new Trace(List.of(new Trace.Column("line.p", Dimension.PRESSURE),
+                new Trace.Column("line.rate", Dimension.PRESSURE),
+                new Trace.Column("port.p", Dimension.PRESSURE)), 4096L * 4 * 8, dir);
+        int n = 20_000;
+        double[] row = new double[3];
+        for (int k = 0; k < n; k++) {
+            double t = k * INTERVAL;
+            row[0] = pressure(t);
+            row[1] = rate(t);
+            row[2] = pressure(t);
+            trace.add(t, row);
+        }
+
+        // Then most samples are on disk, and every column, slice, row and value is the analytic one
+        assertTrue(trace.spilledBytes() > 8L * 4 * n / 2, "spilled " + trace.spilledBytes() + " bytes");
+        double[] p = trace.series(0);
+        double[] rate = trace.series("line.rate");
+        double[] times = trace.times();
+        double[] slice = trace.series(1, 12_345, 17_001);
+        double[] sliceTimes = trace.times(12_345, 17_001);
+        double[] r = new double[4];
+        for (int k = 0; k < n; k++) {
+            double t = k * INTERVAL;
+            assertEquals(t, times[k]);
+            assertEquals(pressure(t), p[k]);
+            assertEquals(rate(t), rate[k]);
+            trace.row(k, r);
+            assertEquals(t, r[0]);
+            assertEquals(pressure(t), r[1]);
+            assertEquals(rate(t), r[2]);
+            assertEquals(pressure(t), trace.value(k, 2));
+            if (k >= 12_345 && k < 17_001) {
+                assertEquals(rate(t), slice[k - 12_345]);
+                assertEquals(t, sliceTimes[k - 12_345]);
+            }
+        }
+        assertEquals(pressure(18.0), trace.valueAt("port.p", 18.0 + 0.3 * INTERVAL));
+        // And identical columns are told from different ones
+        assertTrue(trace.sameSeries(0, 2));
+        assertFalse(trace.sameSeries(0, 1));
+
+        // When it is closed, its file is gone and the samples on disk can no longer be read
+        trace.close();
+        try (Stream<Path> left = Files.list(dir)) {
+            assertEquals(0L, left.count());
+        }
+        assertThrows(IllegalStateException.class, () -> trace.value(5000, 0));
+    }
+
+    @Test
+    void columnsThatDifferInOneSampleAreNotTheSame() {
+        // Given two columns equal except at one sample in the middle (the fingerprint must see it)
+        Trace trace = new Trace(List.of(new Trace.Column("a", Dimension.PRESSURE),
+                new Trace.Column("b", Dimension.PRESSURE)));
+        for (int k = 0; k < 3000; k++) {
+            double v = pressure(k * INTERVAL);
+            trace.add(k * INTERVAL, new double[] {v, k == 1500 ? Math.nextUp(v) : v});
+        }
+        assertFalse(trace.sameSeries(0, 1));
+        assertTrue(trace.sameSeries(1, 1));
+    }
+
+    @Test
+    void aSpillDirectoryThatCannotBeWrittenIsReportedWithItsKey(@TempDir Path dir) {
+        Trace trace = new Trace(List.of(new Trace.Column("a", Dimension.PRESSURE)), 0L, dir.resolve("missing"));
+        BranchsimException e = assertThrows(BranchsimException.class, () -> {
+            for (int k = 0; k < 100_000; k++) {
+                trace.add(k * INTERVAL, new double[] {pressure(k * INTERVAL)});
+            }
+        });
+        assertSame(ErrorKey.TRACE_STORE_FAILED, e.key());
+        assertTrue(e.getMessage().contains("missing"), e.getMessage());
     }
 
     private static double pressure(double t) {

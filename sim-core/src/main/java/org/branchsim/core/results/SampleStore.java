@@ -1,0 +1,289 @@
+package org.branchsim.core.results;
+
+import java.io.IOException;
+import java.lang.ref.Cleaner;
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.nio.channels.FileChannel;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.util.ArrayList;
+import java.util.List;
+import org.branchsim.core.error.BranchsimException;
+import org.branchsim.core.error.ErrorKey;
+
+/**
+ * Rows of doubles of a fixed width (units are the caller's), kept in chunks of rows stored column by column
+ * ({@code chunk[j * rows + r]}), so that one place of every row (a column) is read as one contiguous block per
+ * chunk. Full chunks stay on the heap until they take {@code memoryBudget} bytes; every later full chunk is
+ * written to a temporary file and its array reused, so heap use stays bounded however many rows are appended.
+ * <p>
+ * The file is opened with {@link StandardOpenOption#DELETE_ON_CLOSE} (on Linux it is unlinked as soon as it is
+ * opened, so it disappears even when the process is killed); {@link #close} closes it, and so does a cleaner
+ * when the store becomes unreachable without being closed. Reads of single places load the whole chunk once
+ * (one chunk is cached), so reading rows in order costs one file read per chunk.
+ */
+final class SampleStore implements AutoCloseable {
+
+    /** Target size of one chunk, bytes. */
+    static final int CHUNK_BYTES = 1 << 20;
+    /** Fewest and most rows in a chunk. */
+    static final int MIN_ROWS = 64;
+    static final int MAX_ROWS = 4096;
+
+    private static final Cleaner CLEANER = Cleaner.create();
+
+    private final int width;
+    private final int rows;
+    private final long memoryBudget;
+    private final Path spillDirectory;
+    /** Chunk c on the heap, or null when it is in the file. */
+    private final List<double[]> chunks = new ArrayList<>();
+    private long residentBytes;
+    /** Index of the first chunk in the file (all later full chunks are in the file too), or -1. */
+    private int firstSpilled = -1;
+    private SpillFile spill;
+    private Cleaner.Cleanable cleanable;
+    private double[] spare;
+    private ByteBuffer block;
+    private ByteBuffer whole;
+    private long spilledBytes;
+    private int cachedChunk = -1;
+    private double[] cache;
+    private int size;
+    private boolean closed;
+
+    /**
+     * @param width doubles per row
+     * @param memoryBudget bytes of full chunks kept on the heap before chunks go to the file
+     * @param spillDirectory where the temporary file is made
+     */
+    SampleStore(int width, long memoryBudget, Path spillDirectory) {
+        if (width < 1) {
+            throw new IllegalArgumentException("a row needs at least one place, not " + width);
+        }
+        this.width = width;
+        this.rows = Math.max(MIN_ROWS, Math.min(MAX_ROWS, CHUNK_BYTES / (8 * width)));
+        this.memoryBudget = memoryBudget;
+        this.spillDirectory = spillDirectory;
+    }
+
+    /** @return the number of rows */
+    int size() {
+        return size;
+    }
+
+    /** @return bytes written to the temporary file so far */
+    long spilledBytes() {
+        return spilledBytes;
+    }
+
+    /** Appends one row: {@code first}, then {@code rest} (its length is width - 1). */
+    void append(double first, double[] rest) {
+        int r = size % rows;
+        if (r == 0) {
+            chunks.add(spare != null ? spare : new double[rows * width]);
+            spare = null;
+        }
+        double[] chunk = chunks.get(chunks.size() - 1);
+        chunk[r] = first;
+        for (int j = 1; j < width; j++) {
+            chunk[j * rows + r] = rest[j - 1];
+        }
+        size++;
+        if (size % rows == 0) {
+            retire(chunks.size() - 1);
+        }
+    }
+
+    /** A chunk just filled: keep it on the heap within the budget, else write it to the file. */
+    private void retire(int c) {
+        if (firstSpilled < 0 && residentBytes + chunkBytes() <= memoryBudget) {
+            residentBytes += chunkBytes();
+            return;
+        }
+        if (firstSpilled < 0) {
+            firstSpilled = c;
+        }
+        double[] chunk = chunks.get(c);
+        ByteBuffer b = whole();
+        b.clear();
+        b.asDoubleBuffer().put(chunk);
+        write(b, (long) (c - firstSpilled) * chunkBytes());
+        spilledBytes += chunkBytes();
+        chunks.set(c, null);
+        spare = chunk;
+    }
+
+    private int chunkBytes() {
+        return rows * width * 8;
+    }
+
+    /** @return place j of row k */
+    synchronized double get(int k, int j) {
+        if (k < 0 || k >= size) {
+            throw new IndexOutOfBoundsException("sample " + k + " of " + size);
+        }
+        return chunk(k / rows)[j * rows + k % rows];
+    }
+
+    /** Copies row k into out (width doubles). */
+    synchronized void row(int k, double[] out) {
+        if (k < 0 || k >= size) {
+            throw new IndexOutOfBoundsException("sample " + k + " of " + size);
+        }
+        double[] chunk = chunk(k / rows);
+        int r = k % rows;
+        for (int j = 0; j < width; j++) {
+            out[j] = chunk[j * rows + r];
+        }
+    }
+
+    /** @return place j of rows from (inclusive) to to (exclusive), read one block per chunk */
+    synchronized double[] column(int j, int from, int to) {
+        if (from < 0 || to > size || from > to) {
+            throw new IndexOutOfBoundsException("samples " + from + " to " + to + " of " + size);
+        }
+        double[] out = new double[to - from];
+        int k = from;
+        while (k < to) {
+            int c = k / rows;
+            int r0 = k % rows;
+            int n = Math.min(rows - r0, to - k);
+            double[] chunk = c == cachedChunk ? cache : chunks.get(c);
+            if (chunk != null) {
+                System.arraycopy(chunk, j * rows + r0, out, k - from, n);
+            } else {
+                ByteBuffer b = block();
+                b.clear().limit(n * 8);
+                read(b, (long) (c - firstSpilled) * chunkBytes() + ((long) j * rows + r0) * 8);
+                b.flip();
+                b.asDoubleBuffer().get(out, k - from, n);
+            }
+            k += n;
+        }
+        return out;
+    }
+
+    private ByteBuffer block() {
+        if (block == null) {
+            block = ByteBuffer.allocateDirect(rows * 8).order(ByteOrder.nativeOrder());
+        }
+        return block;
+    }
+
+    /** @return the off-heap buffer of one whole chunk (writes and cached reads) */
+    private ByteBuffer whole() {
+        if (whole == null) {
+            whole = ByteBuffer.allocateDirect(chunkBytes()).order(ByteOrder.nativeOrder());
+        }
+        return whole;
+    }
+
+    /** @return chunk c, from the heap or read whole from the file into the cache */
+    private double[] chunk(int c) {
+        double[] chunk = chunks.get(c);
+        if (chunk != null) {
+            return chunk;
+        }
+        if (c != cachedChunk) {
+            if (cache == null) {
+                cache = new double[rows * width];
+            }
+            ByteBuffer b = whole();
+            b.clear();
+            read(b, (long) (c - firstSpilled) * chunkBytes());
+            b.flip();
+            b.asDoubleBuffer().get(cache);
+            cachedChunk = c;
+        }
+        return cache;
+    }
+
+    private void write(ByteBuffer b, long position) {
+        try {
+            if (spill == null) {
+                spill = SpillFile.open(spillDirectory);
+                cleanable = CLEANER.register(this, spill);
+            }
+            b.limit(chunkBytes()).position(0);
+            while (b.hasRemaining()) {
+                position += spill.channel.write(b, position);
+            }
+        } catch (IOException e) {
+            throw failure(e);
+        }
+    }
+
+    private void read(ByteBuffer b, long position) {
+        if (closed) {
+            throw new IllegalStateException("the trace was closed: its samples on disk are gone");
+        }
+        try {
+            while (b.hasRemaining()) {
+                int n = spill.channel.read(b, position);
+                if (n < 0) {
+                    throw new IOException("the file ended early");
+                }
+                position += n;
+            }
+        } catch (IOException e) {
+            throw failure(e);
+        }
+    }
+
+    private BranchsimException failure(IOException e) {
+        String where = spill != null ? spill.path.toString() : String.valueOf(spillDirectory);
+        return new BranchsimException(ErrorKey.TRACE_STORE_FAILED, List.of(), e, where,
+                e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName());
+    }
+
+    /** Closes and deletes the temporary file, if any (samples on the heap stay readable). */
+    @Override
+    public synchronized void close() {
+        closed = true;
+        cache = null;
+        cachedChunk = -1;
+        if (cleanable != null) {
+            cleanable.clean();
+        }
+    }
+
+    /** The temporary file; closing it deletes it. Holds no reference to the store, so the cleaner can run. */
+    private static final class SpillFile implements Runnable {
+        private final Path path;
+        private final FileChannel channel;
+
+        private SpillFile(Path path, FileChannel channel) {
+            this.path = path;
+            this.channel = channel;
+        }
+
+        static SpillFile open(Path directory) throws IOException {
+            Path p = Files.createTempFile(directory, "branchsim-trace-", ".bin");
+            try {
+                return new SpillFile(p, FileChannel.open(p, StandardOpenOption.READ, StandardOpenOption.WRITE,
+                        StandardOpenOption.DELETE_ON_CLOSE));
+            } catch (IOException e) {
+                Files.deleteIfExists(p);
+                throw e;
+            }
+        }
+
+        @Override
+        public void run() {
+            try {
+                channel.close();
+            } catch (IOException e) {
+                // nothing more can be done: the file was opened delete-on-close, the system removes it
+            } finally {
+                try {
+                    Files.deleteIfExists(path);
+                } catch (IOException e) {
+                    path.toFile().deleteOnExit();
+                }
+            }
+        }
+    }
+}
