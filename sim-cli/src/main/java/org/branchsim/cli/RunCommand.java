@@ -42,7 +42,8 @@ public final class RunCommand implements Callable<Integer> {
     public Integer call() {
         Scenario s = scenario.load();
         try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name()), scenario.file())) {
-            SimulationResult result = Simulator.run(s.circuit(), s.solver());
+            SimulationResult result = Trace.spillingTo(TempFileSpace.inTemporaryDirectory(),
+                    () -> Simulator.run(s.circuit(), s.solver()));
             String summary;
             // a long run keeps its samples in a temporary file: deleted when the outputs are written or fail
             try (Trace trace = result.trace()) {

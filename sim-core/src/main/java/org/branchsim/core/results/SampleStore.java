@@ -4,10 +4,6 @@ import java.io.IOException;
 import java.lang.ref.Cleaner;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
-import java.nio.channels.FileChannel;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.List;
 import org.branchsim.core.error.BranchsimException;
@@ -17,12 +13,12 @@ import org.branchsim.core.error.ErrorKey;
  * Rows of doubles of a fixed width (units are the caller's), kept in chunks of rows stored column by column
  * ({@code chunk[j * rows + r]}), so that one place of every row (a column) is read as one contiguous block per
  * chunk. Full chunks stay on the heap until they take {@code memoryBudget} bytes; every later full chunk is
- * written to a temporary file and its array reused, so heap use stays bounded however many rows are appended.
+ * written to a region of a {@link SpillSpace} (a temporary file) and its array reused, so heap use stays bounded
+ * however many rows are appended. Without a spill space every chunk stays on the heap.
  * <p>
- * The file is opened with {@link StandardOpenOption#DELETE_ON_CLOSE} (on Linux it is unlinked as soon as it is
- * opened, so it disappears even when the process is killed); {@link #close} closes it, and so does a cleaner
- * when the store becomes unreachable without being closed. Reads of single places load the whole chunk once
- * (one chunk is cached), so reading rows in order costs one file read per chunk.
+ * {@link #close} releases the region, and so does a cleaner when the store becomes unreachable without being
+ * closed. Reads of single places load the whole chunk once (one chunk is cached), so reading rows in order costs
+ * one region read per chunk.
  */
 final class SampleStore implements AutoCloseable {
 
@@ -37,13 +33,13 @@ final class SampleStore implements AutoCloseable {
     private final int width;
     private final int rows;
     private final long memoryBudget;
-    private final Path spillDirectory;
+    private final SpillSpace space;
     /** Chunk c on the heap, or null when it is in the file. */
     private final List<double[]> chunks = new ArrayList<>();
     private long residentBytes;
     /** Index of the first chunk in the file (all later full chunks are in the file too), or -1. */
     private int firstSpilled = -1;
-    private SpillFile spill;
+    private SpillSpace.Region spill;
     private Cleaner.Cleanable cleanable;
     private double[] spare;
     private ByteBuffer block;
@@ -56,17 +52,17 @@ final class SampleStore implements AutoCloseable {
 
     /**
      * @param width doubles per row
-     * @param memoryBudget bytes of full chunks kept on the heap before chunks go to the file
-     * @param spillDirectory where the temporary file is made
+     * @param memoryBudget bytes of full chunks kept on the heap before chunks go to the spill space
+     * @param space where later chunks go, or null to keep every chunk on the heap
      */
-    SampleStore(int width, long memoryBudget, Path spillDirectory) {
+    SampleStore(int width, long memoryBudget, SpillSpace space) {
         if (width < 1) {
             throw new IllegalArgumentException("a row needs at least one place, not " + width);
         }
         this.width = width;
         this.rows = Math.max(MIN_ROWS, Math.min(MAX_ROWS, CHUNK_BYTES / (8 * width)));
         this.memoryBudget = memoryBudget;
-        this.spillDirectory = spillDirectory;
+        this.space = space;
     }
 
     /** @return the number of rows */
@@ -99,7 +95,7 @@ final class SampleStore implements AutoCloseable {
 
     /** A chunk just filled: keep it on the heap within the budget, else write it to the file. */
     private void retire(int c) {
-        if (firstSpilled < 0 && residentBytes + chunkBytes() <= memoryBudget) {
+        if (firstSpilled < 0 && (space == null || residentBytes + chunkBytes() <= memoryBudget)) {
             residentBytes += chunkBytes();
             return;
         }
@@ -204,13 +200,11 @@ final class SampleStore implements AutoCloseable {
     private void write(ByteBuffer b, long position) {
         try {
             if (spill == null) {
-                spill = SpillFile.open(spillDirectory);
-                cleanable = CLEANER.register(this, spill);
+                spill = space.open();
+                cleanable = CLEANER.register(this, new Release(spill));
             }
             b.limit(chunkBytes()).position(0);
-            while (b.hasRemaining()) {
-                position += spill.channel.write(b, position);
-            }
+            spill.write(b, position);
         } catch (IOException e) {
             throw failure(e);
         }
@@ -221,20 +215,14 @@ final class SampleStore implements AutoCloseable {
             throw new IllegalStateException("the trace was closed: its samples on disk are gone");
         }
         try {
-            while (b.hasRemaining()) {
-                int n = spill.channel.read(b, position);
-                if (n < 0) {
-                    throw new IOException("the file ended early");
-                }
-                position += n;
-            }
+            spill.read(b, position);
         } catch (IOException e) {
             throw failure(e);
         }
     }
 
     private BranchsimException failure(IOException e) {
-        String where = spill != null ? spill.path.toString() : String.valueOf(spillDirectory);
+        String where = spill != null ? spill.describe() : space.describe();
         return new BranchsimException(ErrorKey.TRACE_STORE_FAILED, List.of(), e, where,
                 e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName());
     }
@@ -250,39 +238,21 @@ final class SampleStore implements AutoCloseable {
         }
     }
 
-    /** The temporary file; closing it deletes it. Holds no reference to the store, so the cleaner can run. */
-    private static final class SpillFile implements Runnable {
-        private final Path path;
-        private final FileChannel channel;
+    /** Closes a region for the cleaner; holds no reference to the store, so that the store can be collected. */
+    private static final class Release implements Runnable {
+        private final SpillSpace.Region region;
 
-        private SpillFile(Path path, FileChannel channel) {
-            this.path = path;
-            this.channel = channel;
-        }
-
-        static SpillFile open(Path directory) throws IOException {
-            Path p = Files.createTempFile(directory, "branchsim-trace-", ".bin");
-            try {
-                return new SpillFile(p, FileChannel.open(p, StandardOpenOption.READ, StandardOpenOption.WRITE,
-                        StandardOpenOption.DELETE_ON_CLOSE));
-            } catch (IOException e) {
-                Files.deleteIfExists(p);
-                throw e;
-            }
+        Release(SpillSpace.Region region) {
+            this.region = region;
         }
 
         @Override
         public void run() {
             try {
-                channel.close();
+                region.close();
             } catch (IOException e) {
-                // nothing more can be done: the file was opened delete-on-close, the system removes it
-            } finally {
-                try {
-                    Files.deleteIfExists(path);
-                } catch (IOException e) {
-                    path.toFile().deleteOnExit();
-                }
+                throw new BranchsimException(ErrorKey.TRACE_STORE_FAILED, List.of(), e, region.describe(),
+                        e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName());
             }
         }
     }

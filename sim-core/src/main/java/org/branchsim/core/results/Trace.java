@@ -1,16 +1,17 @@
 package org.branchsim.core.results;
 
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.Supplier;
 import org.branchsim.core.units.Dimension;
 
 /**
  * Signals sampled on a uniform time grid: times in s and, per signal, values in SI. Samples are appended while
  * the run integrates and kept in a bounded-memory store: chunks of primitive doubles, column by column, on the
- * heap up to {@link #DEFAULT_MEMORY_BUDGET} bytes and in a temporary file beyond it (deleted on {@link #close},
- * or when the trace is collected). Analysis reads it a column at a time ({@link #series}), writers row by row
+ * heap up to {@link #DEFAULT_MEMORY_BUDGET} bytes and beyond it in a {@link SpillSpace} (a temporary file the
+ * command line provides through {@link #spillingTo}; released on {@link #close}, or when the trace is
+ * collected). Without a spill space every sample stays on the heap. Analysis reads it a column at a time ({@link #series}), writers row by row
  * ({@link #row}). A fingerprint of every column, taken as samples arrive, tells identical columns apart
  * without reading them ({@link #sameSeries}).
  */
@@ -27,25 +28,54 @@ public final class Trace implements AutoCloseable {
     private static final long FNV_PRIME = 0x100000001b3L;
     private static final long FNV_OFFSET = 0xcbf29ce484222325L;
 
+    /** The spill space traces made on this thread use (see {@link #spillingTo}). */
+    private static final ThreadLocal<SpillSpace> SPACE = new ThreadLocal<>();
+
     private final List<Column> columns;
     private final SampleStore store;
     private final long[] fingerprint;
 
-    /** @param columns the signals, in column order (samples beyond 8 MiB go to a file in java.io.tmpdir) */
+    /**
+     * @param columns the signals, in column order (samples beyond {@link #DEFAULT_MEMORY_BUDGET} go to the spill
+     *        space of {@link #spillingTo} on this thread, if any)
+     */
     public Trace(List<Column> columns) {
-        this(columns, DEFAULT_MEMORY_BUDGET, Path.of(System.getProperty("java.io.tmpdir")));
+        this(columns, DEFAULT_MEMORY_BUDGET, SPACE.get());
     }
 
     /**
      * @param columns the signals, in column order
-     * @param memoryBudget bytes of samples kept on the heap before later ones go to a temporary file
-     * @param spillDirectory the directory of that file
+     * @param memoryBudget bytes of samples kept on the heap before later ones go to the spill space
+     * @param space where they go, or null to keep every sample on the heap
      */
-    public Trace(List<Column> columns, long memoryBudget, Path spillDirectory) {
+    public Trace(List<Column> columns, long memoryBudget, SpillSpace space) {
         this.columns = List.copyOf(columns);
-        this.store = new SampleStore(this.columns.size() + 1, memoryBudget, spillDirectory);
+        this.store = new SampleStore(this.columns.size() + 1, memoryBudget, space);
         this.fingerprint = new long[this.columns.size()];
         Arrays.fill(fingerprint, FNV_OFFSET);
+    }
+
+    /**
+     * Runs a piece of work whose traces, made on this thread, keep samples beyond the memory budget in a spill
+     * space (a run of the command line: its samples go to a temporary file instead of the heap).
+     *
+     * @param space the spill space
+     * @param work the work (e.g. a simulation run)
+     * @param <T> what it returns
+     * @return what the work returned
+     */
+    public static <T> T spillingTo(SpillSpace space, Supplier<T> work) {
+        SpillSpace before = SPACE.get();
+        SPACE.set(space);
+        try {
+            return work.get();
+        } finally {
+            if (before == null) {
+                SPACE.remove();
+            } else {
+                SPACE.set(before);
+            }
+        }
     }
 
     /** Appends one sample: time (s) and the values of all signals (SI) in column order (copied). */
@@ -59,13 +89,13 @@ public final class Trace implements AutoCloseable {
         }
     }
 
-    /** Closes and deletes the temporary file, if the trace needed one; samples can no longer be read then. */
+    /** Releases the spill region (deletes the temporary file), if the trace needed one; its samples are gone then. */
     @Override
     public void close() {
         store.close();
     }
 
-    /** @return bytes of samples written to the temporary file (0 while the trace fits its memory budget) */
+    /** @return bytes of samples written to the spill space (0 while the trace fits its memory budget) */
     public long spilledBytes() {
         return store.spilledBytes();
     }

@@ -9,15 +9,12 @@ import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.Path;
+import java.nio.ByteBuffer;
 import java.util.List;
-import java.util.stream.Stream;
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.units.Dimension;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
  * A trace gives back every sample it was given, across the chunks it stores them in. The samples are an analytic
@@ -67,12 +64,13 @@ class TraceTest {
     }
 
     @Test
-    void samplesBeyondTheMemoryBudgetComeBackFromTheFileAndTheFileIsDeletedOnClose(@TempDir Path dir)
-            throws IOException {
-        // Given a budget of one chunk (4096 rows of 4 doubles), 20 000 samples of p(t), dp/dt and p(t) again
+    void samplesBeyondTheMemoryBudgetComeBackFromTheSpillSpaceWhichIsReleasedOnClose() {
+        // Given a spill space outside the heap (a byte buffer here; a temporary file in the command line)
+        Space space = new Space(false);
+        // and a budget of one chunk (4096 rows of 4 doubles), 20 000 samples of p(t), dp/dt and p(t) again
         Trace trace = new Trace(List.of(new Trace.Column("line.p", Dimension.PRESSURE),
                 new Trace.Column("line.rate", Dimension.PRESSURE),
-                new Trace.Column("port.p", Dimension.PRESSURE)), 4096L * 4 * 8, dir);
+                new Trace.Column("port.p", Dimension.PRESSURE)), 4096L * 4 * 8, space);
         int n = 20_000;
         double[] row = new double[3];
         for (int k = 0; k < n; k++) {
@@ -111,11 +109,11 @@ class TraceTest {
         assertTrue(trace.sameSeries(0, 2));
         assertFalse(trace.sameSeries(0, 1));
 
-        // When it is closed, its file is gone and the samples on disk can no longer be read
+        // When it is closed, its region is released and the samples in it can no longer be read
+        assertEquals(1, space.opened);
+        assertFalse(space.released);
         trace.close();
-        try (Stream<Path> left = Files.list(dir)) {
-            assertEquals(0L, left.count());
-        }
+        assertTrue(space.released);
         assertThrows(IllegalStateException.class, () -> trace.value(5000, 0));
     }
 
@@ -133,15 +131,74 @@ class TraceTest {
     }
 
     @Test
-    void aSpillDirectoryThatCannotBeWrittenIsReportedWithItsKey(@TempDir Path dir) {
-        Trace trace = new Trace(List.of(new Trace.Column("a", Dimension.PRESSURE)), 0L, dir.resolve("missing"));
+    void aSpillSpaceThatCannotBeWrittenIsReportedWithItsKey() {
+        Trace trace = new Trace(List.of(new Trace.Column("a", Dimension.PRESSURE)), 0L, new Space(true));
         BranchsimException e = assertThrows(BranchsimException.class, () -> {
             for (int k = 0; k < 100_000; k++) {
                 trace.add(k * INTERVAL, new double[] {pressure(k * INTERVAL)});
             }
         });
         assertSame(ErrorKey.TRACE_STORE_FAILED, e.key());
-        assertTrue(e.getMessage().contains("missing"), e.getMessage());
+        assertTrue(e.getMessage().contains("test region: disk full"), e.getMessage());
+    }
+
+    @Test
+    void withoutASpillSpaceEverySampleStaysOnTheHeap() {
+        Trace trace = new Trace(List.of(new Trace.Column("a", Dimension.PRESSURE)), 0L, null);
+        for (int k = 0; k < 10_000; k++) {
+            trace.add(k * INTERVAL, new double[] {pressure(k * INTERVAL)});
+        }
+        assertEquals(0L, trace.spilledBytes());
+        assertEquals(pressure(9.999), trace.series(0)[9_999]);
+    }
+
+    /** A spill space in a heap buffer, or one whose writes fail (a full disk). */
+    private static final class Space implements SpillSpace {
+        private final boolean failing;
+        private int opened;
+        private boolean released;
+
+        Space(boolean failing) {
+            this.failing = failing;
+        }
+
+        @Override
+        public Region open() {
+            opened++;
+            ByteBuffer store = ByteBuffer.allocate(1 << 22);
+            return new Region() {
+                @Override
+                public void write(ByteBuffer bytes, long position) throws IOException {
+                    if (failing) {
+                        throw new IOException("disk full");
+                    }
+                    store.put((int) position, bytes, bytes.position(), bytes.remaining());
+                    bytes.position(bytes.limit());
+                }
+
+                @Override
+                public void read(ByteBuffer bytes, long position) {
+                    int n = bytes.remaining();
+                    bytes.put(bytes.position(), store, (int) position, n);
+                    bytes.position(bytes.position() + n);
+                }
+
+                @Override
+                public String describe() {
+                    return "test region";
+                }
+
+                @Override
+                public void close() {
+                    released = true;
+                }
+            };
+        }
+
+        @Override
+        public String describe() {
+            return "test space";
+        }
     }
 
     private static double pressure(double t) {
