@@ -24,8 +24,9 @@ final class SampleStore implements AutoCloseable {
 
     /** Target size of one chunk, bytes. */
     static final int CHUNK_BYTES = 1 << 20;
-    /** Fewest and most rows in a chunk. */
+    /** Fewest rows in a chunk (very wide rows). */
     static final int MIN_ROWS = 64;
+    /** Most rows in a chunk (narrow rows). */
     static final int MAX_ROWS = 4096;
 
     private static final Cleaner CLEANER = Cleaner.create();
@@ -34,10 +35,10 @@ final class SampleStore implements AutoCloseable {
     private final int rows;
     private final long memoryBudget;
     private final SpillSpace space;
-    /** Chunk c on the heap, or null when it is in the file. */
+    /** Chunk c on the heap, or null when it is in the spill region. */
     private final List<double[]> chunks = new ArrayList<>();
     private long residentBytes;
-    /** Index of the first chunk in the file (all later full chunks are in the file too), or -1. */
+    /** Index of the first chunk in the spill region (all later full chunks are there too), or -1. */
     private int firstSpilled = -1;
     private SpillSpace.Region spill;
     private Cleaner.Cleanable cleanable;
@@ -70,7 +71,7 @@ final class SampleStore implements AutoCloseable {
         return size;
     }
 
-    /** @return bytes written to the temporary file so far */
+    /** @return bytes written to the spill region so far */
     long spilledBytes() {
         return spilledBytes;
     }
@@ -93,7 +94,7 @@ final class SampleStore implements AutoCloseable {
         }
     }
 
-    /** A chunk just filled: keep it on the heap within the budget, else write it to the file. */
+    /** A chunk just filled: keep it on the heap within the budget (or without a spill space), else spill it. */
     private void retire(int c) {
         if (firstSpilled < 0 && (space == null || residentBytes + chunkBytes() <= memoryBudget)) {
             residentBytes += chunkBytes();
@@ -177,7 +178,7 @@ final class SampleStore implements AutoCloseable {
         return whole;
     }
 
-    /** @return chunk c, from the heap or read whole from the file into the cache */
+    /** @return chunk c, from the heap or read whole from the spill region into the cache */
     private double[] chunk(int c) {
         double[] chunk = chunks.get(c);
         if (chunk != null) {
@@ -227,7 +228,7 @@ final class SampleStore implements AutoCloseable {
                 e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName());
     }
 
-    /** Closes and deletes the temporary file, if any (samples on the heap stay readable). */
+    /** Releases the spill region, if any (samples on the heap stay readable, spilled ones are gone). */
     @Override
     public synchronized void close() {
         closed = true;

@@ -21,7 +21,7 @@ public final class Trace implements AutoCloseable {
     public record Column(String name, Dimension dimension) {
     }
 
-    /** Bytes of samples kept on the heap before later samples go to a temporary file (8 MiB). */
+    /** Bytes of samples kept on the heap before later samples go to the spill space, if any (8 MiB). */
     public static final long DEFAULT_MEMORY_BUDGET = 8L << 20;
 
     /** Multiplier of the 64-bit FNV-1a hash (Fowler, Noll and Vo; IETF draft-eastlake-fnv, 2019). */
