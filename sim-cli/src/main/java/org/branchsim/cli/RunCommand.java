@@ -11,6 +11,7 @@ import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.analysis.SignalStatistics;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.SolverStatistics;
+import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.solve.Simulator;
 import org.branchsim.core.units.Dimension;
@@ -41,15 +42,21 @@ public final class RunCommand implements Callable<Integer> {
     public Integer call() {
         Scenario s = scenario.load();
         try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name()), scenario.file())) {
-            SimulationResult result = Simulator.run(s.circuit(), s.solver());
-            List<OscillationFinding> oscillations = OscillationScan.scan(result);
-            List<ReducingValveMetrics> valves = ReducingValveMetrics.of(result, s.metricsFrom(), s.metricsTo(),
-                    oscillations);
-            String summary = summary(s, result, valves, oscillations);
-            folder.write("trace.csv", target -> TraceCsv.write(result.trace(), s.units(), target));
-            folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
-            FigureSet.write(s, result.trace(), valves, folder);
-            FigureSet.writeOscillations(s, result.trace(), oscillations, folder);
+            SimulationResult result = Trace.spillingTo(TempFileSpace.inTemporaryDirectory(),
+                    () -> Simulator.run(s.circuit(), s.solver()));
+            String summary;
+            // a long run keeps its samples in a temporary file: deleted when the outputs are written or fail
+            try (Trace trace = result.trace()) {
+                List<OscillationFinding> oscillations = OscillationScan.scan(result);
+                List<ReducingValveMetrics> valves = ReducingValveMetrics.of(result, s.metricsFrom(), s.metricsTo(),
+                        oscillations);
+                summary = summary(s, result, valves, oscillations);
+                folder.write("trace.csv", target -> TraceCsv.write(trace, s.units(), target));
+                folder.writeText("metrics.json",
+                        MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
+                FigureSet.write(s, trace, valves, folder);
+                FigureSet.writeOscillations(s, trace, oscillations, folder);
+            }
             folder.writeText("summary.txt", summary);
             folder.commit();
             PrintWriter w = spec.commandLine().getOut();

@@ -15,7 +15,8 @@ import org.branchsim.core.units.UnitSystem;
 /**
  * Writes a trace as CSV: first column {@code t [s]}, then one column per signal headed
  * {@code <name> [<unit>]} in the chosen unit system. Numbers use 7 significant digits and '.' decimals, the text
- * of {@code %.7g} (zero as {@code 0}), written row by row to a buffered stream without per-cell formatting.
+ * of {@code %.7g} (zero as {@code 0}), written row by row to a buffered stream without per-cell formatting; a
+ * long trace is read from its store a chunk at a time, never whole.
  */
 public final class TraceCsv {
 
@@ -69,11 +70,13 @@ public final class TraceCsv {
             sb.append(',').append(c.name()).append(" [").append(unit[i].symbol()).append(']');
         }
         sb.append('\n');
+        double[] row = new double[n + 1];
         for (int k = 0; k < trace.size(); k++) {
-            SignificantDigits.append(sb, trace.time(k));
+            trace.row(k, row);
+            SignificantDigits.append(sb, row[0]);
             for (int i = 0; i < n; i++) {
                 sb.append(',');
-                SignificantDigits.append(sb, unit[i].fromSi(trace.value(k, i)));
+                SignificantDigits.append(sb, unit[i].fromSi(row[1 + i]));
             }
             sb.append('\n');
             if (sb.length() >= CHUNK) {

@@ -1,7 +1,7 @@
 package org.branchsim.plots;
 
-import java.util.Arrays;
 import java.util.List;
+import java.util.function.IntFunction;
 
 /**
  * A value axis range fitted to signals after start-up, robust against short spikes: the central
@@ -39,7 +39,22 @@ public record FittedRange(double low, double high, double clippedValue, double c
      * @return the fitted range
      */
     public static FittedRange of(double[] times, List<double[]> signals, double fitFrom) {
-        if (signals.isEmpty() || times.length == 0) {
+        return of(times, signals.size(), signals::get, fitFrom);
+    }
+
+    /**
+     * The same range, reading the signals one at a time (a long run's columns are read again for each pass
+     * rather than held together): the quantiles come from {@link PooledRank}, exactly as from sorting the
+     * pooled samples.
+     *
+     * @param times sample times, s
+     * @param count number of signals
+     * @param signal sample values of signal j, one per time (may be read several times)
+     * @param fitFrom end of start-up, s (all samples are used when no sample is at or after it)
+     * @return the fitted range
+     */
+    public static FittedRange of(double[] times, int count, IntFunction<double[]> signal, double fitFrom) {
+        if (count == 0 || times.length == 0) {
             throw new IllegalArgumentException("no samples to fit");
         }
         double start = fitFrom <= times[times.length - 1] ? fitFrom : times[0];
@@ -47,19 +62,20 @@ public record FittedRange(double low, double high, double clippedValue, double c
         while (times[first] < start) {
             first++;
         }
-        int per = times.length - first;
-        double[] pooled = new double[per * signals.size()];
-        int n = 0;
-        for (double[] v : signals) {
-            System.arraycopy(v, first, pooled, n, per);
-            n += per;
-        }
-        Arrays.sort(pooled);
-        double lo = pooled[(int) Math.floor(LOW_QUANTILE * (n - 1))];
-        double hi = pooled[(int) Math.ceil(HIGH_QUANTILE * (n - 1))];
+        long n = (long) (times.length - first) * count;
+        PooledRank pooled = new PooledRank(signal, count, first);
+        double lo = pooled.at((long) Math.floor(LOW_QUANTILE * (n - 1)));
+        double hi = pooled.at((long) Math.ceil(HIGH_QUANTILE * (n - 1)));
         double central = hi - lo;
-        double min = pooled[0];
-        double max = pooled[n - 1];
+        double min = Double.POSITIVE_INFINITY;
+        double max = Double.NEGATIVE_INFINITY;
+        for (int j = 0; j < count; j++) {
+            double[] v = signal.apply(j);
+            for (int k = first; k < v.length; k++) {
+                min = Math.min(min, v[k]);
+                max = Math.max(max, v[k]);
+            }
+        }
         if (min >= lo - SPIKE_ALLOWANCE * central) {
             lo = min;
         }
@@ -72,7 +88,8 @@ public record FittedRange(double low, double high, double clippedValue, double c
         double worst = Double.NaN;
         double worstAt = Double.NaN;
         double worstBy = 0.0;
-        for (double[] v : signals) {
+        for (int j = 0; j < count; j++) {
+            double[] v = signal.apply(j);
             for (int k = 0; k < v.length; k++) {
                 double by = Math.max(v[k] - high, low - v[k]);
                 if (by > worstBy) {

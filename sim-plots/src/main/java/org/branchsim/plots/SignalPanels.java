@@ -43,10 +43,10 @@ public final class SignalPanels {
         List<String> kept = new ArrayList<>();
         List<StringBuilder> labels = new ArrayList<>();
         for (String s : signals) {
-            double[] v = trace.series(trace.indexOf(s));
+            int i = trace.indexOf(s);
             int same = -1;
             for (int k = 0; k < kept.size() && same < 0; k++) {
-                if (Arrays.equals(v, trace.series(trace.indexOf(kept.get(k))))) {
+                if (trace.sameSeries(i, trace.indexOf(kept.get(k)))) {
                     same = k;
                 }
             }
@@ -124,8 +124,7 @@ public final class SignalPanels {
         if (n == 0) {
             return 0.0;
         }
-        double[] sorted = Arrays.copyOf(m, n);
-        Arrays.sort(sorted);
-        return sorted[(int) Math.floor(SIZE_QUANTILE * (n - 1))];
+        Arrays.sort(m, 0, n);
+        return m[(int) Math.floor(SIZE_QUANTILE * (n - 1))];
     }
 }

@@ -82,15 +82,28 @@ public final class TraceCharts {
         plot.setRangeGridlinePaint(new Color(0xd0d0d0));
     }
 
-    /** @return one signal's samples in [from, to] in a display unit, keyed by a label */
+    /**
+     * @return one signal's samples in [from, to] in a display unit, keyed by a label, cut to the
+     *         {@link PixelEnvelope} of the figure's width
+     */
     static XYSeries series(Trace trace, String signal, String label, Unit unit, double from, double to) {
-        double[] t = trace.times();
-        double[] v = trace.series(trace.indexOf(signal));
+        return decimated(label, trace.times(), trace.series(trace.indexOf(signal)), unit, from, to);
+    }
+
+    /**
+     * @param label series key
+     * @param t sample times, s
+     * @param v samples, SI
+     * @param unit display unit (its conversion from SI increases with the value, so the envelope of the SI
+     *        samples is the envelope of the shown ones)
+     * @param from first time drawn, s
+     * @param to last time drawn, s
+     * @return the samples in [from, to] that the {@link PixelEnvelope} of a {@link #WIDTH} px figure keeps
+     */
+    static XYSeries decimated(String label, double[] t, double[] v, Unit unit, double from, double to) {
         XYSeries s = new XYSeries(label, false, true);
-        for (int k = 0; k < v.length; k++) {
-            if (t[k] >= from && t[k] <= to) {
-                s.add(t[k], unit.fromSi(v[k]), false);
-            }
+        for (int k : PixelEnvelope.indices(t, v, from, to, WIDTH)) {
+            s.add(t[k], unit.fromSi(v[k]), false);
         }
         return s;
     }
@@ -180,12 +193,8 @@ public final class TraceCharts {
         for (String s : signals) {
             int i = trace.indexOf(s);
             Unit u = units.displayUnit(trace.columns().get(i).dimension());
-            XYSeries series = new XYSeries(s, false, true);
-            double[] values = trace.series(i);
-            for (int k = 0; k < values.length; k++) {
-                series.add(times[k], u.fromSi(values[k]), false);
-            }
-            data.addSeries(series);
+            data.addSeries(decimated(s, times, trace.series(i), u, Double.NEGATIVE_INFINITY,
+                    Double.POSITIVE_INFINITY));
         }
         NumberAxis y = new NumberAxis(label);
         y.setAutoRangeIncludesZero(false);
@@ -262,19 +271,20 @@ public final class TraceCharts {
             Unit u = units.displayUnit(dim);
             XYSeriesCollection data = new XYSeriesCollection();
             XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
-            List<double[]> values = new ArrayList<>();
             for (int i = 0; i < group.size(); i++) {
                 SignalPanels.Drawn d = group.get(i);
-                data.addSeries(series(trace, d.signal(), d.label(), u, t[0], t[t.length - 1]));
+                data.addSeries(decimated(d.label(), t, trace.series(trace.indexOf(d.signal())), u, t[0],
+                        t[t.length - 1]));
                 style(r, i, k++, 1.5f);
-                double[] v = trace.series(trace.indexOf(d.signal()));
-                double[] shown = new double[v.length];
-                for (int j = 0; j < v.length; j++) {
-                    shown[j] = u.fromSi(v[j]);
-                }
-                values.add(shown);
             }
-            FittedRange range = FittedRange.of(t, values, fitFrom);
+            // the axis is fitted to every sample, not to the envelope: each signal is read again, one at a time
+            FittedRange range = FittedRange.of(t, group.size(), j -> {
+                double[] shown = trace.series(trace.indexOf(group.get(j).signal()));
+                for (int n = 0; n < shown.length; n++) {
+                    shown[n] = u.fromSi(shown[n]);
+                }
+                return shown;
+            }, fitFrom);
             String label = group.size() == 1 ? group.get(0).label() : dim.humanName();
             NumberAxis y = new NumberAxis(label + " [" + u.symbol() + "]");
             y.setAutoRange(false);
@@ -351,15 +361,7 @@ public final class TraceCharts {
             }
             d = r.trace().columns().get(i).dimension();
             Unit u = units.displayUnit(d);
-            XYSeries series = new XYSeries(r.label(), false, true);
-            double[] t = r.trace().times();
-            double[] v = r.trace().series(i);
-            for (int k = 0; k < v.length; k++) {
-                if (t[k] >= from && t[k] <= to) {
-                    series.add(t[k], u.fromSi(v[k]), false);
-                }
-            }
-            data.addSeries(series);
+            data.addSeries(decimated(r.label(), r.trace().times(), r.trace().series(i), u, from, to));
         }
         NumberAxis y = new NumberAxis(axisLabel(signal, d, units));
         y.setAutoRangeIncludesZero(false);

@@ -1,7 +1,6 @@
 package org.branchsim.core.analysis;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
@@ -63,22 +62,31 @@ public final class OscillationScan {
     public static List<OscillationFinding> scan(SimulationResult result, List<ScanWindow> windows) {
         Trace trace = result.trace();
         double[] t = trace.times();
-        List<Integer> scanned = scannedColumns(trace);
-        List<OscillationFinding> all = new ArrayList<>();
-        for (ScanWindow w : windows) {
-            List<SignalSamples> signals = new ArrayList<>();
-            for (int i : scanned) {
-                Trace.Column c = trace.columns().get(i);
-                double[] x = trace.series(i);
-                signals.add(new SignalSamples(c.name(), c.dimension(), x, threshold(c.dimension(), t, x, w)));
+        // one signal at a time (a long run's trace is read a column at a time, never whole), every window for it;
+        // then each window's components, in signal order, grouped as OscillationDetector.detect groups them
+        List<List<SignalOscillation>> components = new ArrayList<>();
+        for (int w = 0; w < windows.size(); w++) {
+            components.add(new ArrayList<>());
+        }
+        for (int i : scannedColumns(trace)) {
+            Trace.Column c = trace.columns().get(i);
+            double[] x = trace.series(i);
+            for (int w = 0; w < windows.size(); w++) {
+                ScanWindow win = windows.get(w);
+                SignalSamples s = new SignalSamples(c.name(), c.dimension(), x, threshold(c.dimension(), t, x, win));
+                components.get(w).addAll(OscillationDetector.components(t, s, win.from(), win.to()));
             }
-            for (List<OscillationGroup> family : fold(OscillationDetector.detect(t, signals, w.from(), w.to()))) {
-                all.add(finding(family, w, result.events()));
+        }
+        List<OscillationFinding> all = new ArrayList<>();
+        for (int w = 0; w < windows.size(); w++) {
+            for (List<OscillationGroup> family : fold(OscillationGrouping.group(components.get(w)))) {
+                all.add(finding(family, windows.get(w), result.events()));
             }
         }
         return merge(all);
     }
 
+    /** @return the pressure, position and speed columns, each signal equal to an earlier one left out */
     private static List<Integer> scannedColumns(Trace trace) {
         List<Integer> out = new ArrayList<>();
         for (int i = 0; i < trace.columns().size(); i++) {
@@ -86,10 +94,9 @@ public final class OscillationScan {
             if (d != Dimension.PRESSURE && d != Dimension.LENGTH && d != Dimension.ROTATIONAL_SPEED) {
                 continue;
             }
-            double[] x = trace.series(i);
             boolean repeat = false;
             for (int j : out) {
-                if (Arrays.equals(x, trace.series(j))) {
+                if (trace.sameSeries(i, j)) {
                     repeat = true;
                     break;
                 }

@@ -88,7 +88,9 @@ public enum ErrorKey {
     /** Every variant of a study failed, so the study has no result (nothing is written). */
     STUDY_FAILED(false, "all {0} variants failed, nothing written; the first failure (variant {1}): {2}"),
     /** A characteristic was asked of a scenario that lacks what it needs (a reducing valve, a ramp). */
-    NOTHING_TO_CHARACTERISE(true, "{0}: no characteristic can be drawn: {1}");
+    NOTHING_TO_CHARACTERISE(true, "{0}: no characteristic can be drawn: {1}"),
+    /** The spill space (a temporary file) that holds a long run's samples beyond the memory budget fails. */
+    TRACE_STORE_FAILED(false, "cannot keep the samples of the run outside the heap, in {0}: {1}");
 
     private final boolean inputError;
     private final String pattern;
