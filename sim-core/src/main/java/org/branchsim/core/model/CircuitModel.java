@@ -244,11 +244,15 @@ public final class CircuitModel {
      * @return the work buffer
      */
     public Evaluation workspace(Member.Mode[] modes, double[] impulses) {
+        checkRunArrays(modes, impulses);
+        return new Evaluation(nodes, modes, impulses);
+    }
+
+    private void checkRunArrays(Member.Mode[] modes, double[] impulses) {
         if (modes.length != members.size() || impulses.length != accounts.size()) {
             throw new IllegalArgumentException("a run of " + name + " needs " + members.size() + " member modes and "
                     + accounts.size() + " impulse accounts, found " + modes.length + " and " + impulses.length);
         }
-        return new Evaluation(nodes, modes, impulses);
     }
 
     /**
@@ -256,7 +260,7 @@ public final class CircuitModel {
      * modes and impulse ledger like {@link #workspace}.
      */
     public JacobianWorkspace jacobianWorkspace(Member.Mode[] modes, double[] impulses) {
-        workspace(modes, impulses);
+        checkRunArrays(modes, impulses);
         return new JacobianWorkspace(nodes, modes, impulses, typical);
     }
 
