@@ -15,7 +15,8 @@ import org.branchsim.core.units.Dimension;
  * Check valve from inlet to outlet, quasi-static: the poppet's inertia is neglected, so its opening follows
  * the pressure difference: closed and tight on its seat below the cracking pressure, opening in proportion
  * to (dp - p_crack) until fully open at p_crack + dp_full. Cracking and full opening are events (corners
- * of the area curve). Reverse flow is blocked (the seat is tight).
+ * of the area curve). Reverse flow is blocked (the seat is tight). Partials: dq/d(dp) is the
+ * law's slope plus, while opening, (q/A + dq/d(dp_t) (-dp_t/A)) A_max / dp_full.
  */
 public final class CheckValve implements Element {
     /** Offset of the cracking event, Pa, so that its switching function is never identically zero. */
@@ -29,7 +30,7 @@ public final class CheckValve implements Element {
     private final double maxArea;
     private final double cd;
     private double density;
-    private double nu;
+    private double transitionConstant;
     private SignalHandle q;
     private SignalHandle openingSignal;
     private EnergyAccount loss;
@@ -67,7 +68,7 @@ public final class CheckValve implements Element {
     @Override
     public void bind(Binder b) {
         density = b.fluid().density();
-        nu = b.fluid().kinematicViscosity();
+        transitionConstant = OrificeLaw.transitionConstant(cd, density, b.fluid().kinematicViscosity());
         q = b.signal("q", Dimension.VOLUME_FLOW);
         openingSignal = b.signal("opening", Dimension.DIMENSIONLESS);
         loss = b.account("loss", EnergyAccount.Kind.LOSS);
@@ -82,16 +83,31 @@ public final class CheckValve implements Element {
     }
 
     @Override
+    public boolean suppliesPartials() {
+        return true;
+    }
+
+    @Override
     public void evaluate(Evaluation e) {
         double dp = e.pressure(inlet) - e.pressure(outlet);
         double u = opening(dp);
         double flow = 0.0;
+        double slope = 0.0;
         if (u > 0.0) {
             double area = u * maxArea;
-            double dpT = OrificeLaw.transitionPressure(cd, OrificeLaw.circularDiameter(area), density, nu);
+            double dpT = OrificeLaw.roundHoleTransition(transitionConstant, area);
             flow = OrificeLaw.flow(cd, area, dp, density, dpT);
+            if (e.partials()) {
+                slope = OrificeLaw.slope(cd, area, dp, density, dpT);
+                if (u < 1.0) {
+                    // the area grows with dp: dA/d(dp) = A_max / span; dq/dA = q/A, d(dp_t)/dA = -dp_t/A
+                    double dqdA = flow / area
+                            + OrificeLaw.transitionSlope(cd, area, dp, density, dpT) * (-dpT / area);
+                    slope += dqdA * maxArea / fullOpenSpan;
+                }
+            }
         }
-        e.flow(inlet, outlet, flow);
+        e.flow(inlet, outlet, flow, slope, -slope);
         if (e.recording()) {
             e.signal(q, flow);
             e.signal(openingSignal, u);

@@ -130,6 +130,37 @@ public final class Cylinder implements Element {
         return contact.stiffness() * (x - contact.position()) + contact.damping() * v;
     }
 
+    /**
+     * The partials: chamber volumes dV_1/dx = A_1, dV_2/dx = -A_2; displacement flows -A_1, +A_2 per x'; leakage
+     * conductances; the force's dF/dp_1 = A_1, dF/dp_2 = -A_2, dF/dx = -k_c (in contact), and
+     * dF/dx' = -F_c (1 - tanh^2(x'/v_s)) / v_s - b - c_c (in contact).
+     */
+    private void addPartials(Evaluation e, double x, double v) {
+        e.volumePartial(capEnd, piston.positionSlot(), a1);
+        e.volumePartial(rodEnd, piston.positionSlot(), -a2);
+        e.inflowPartial(capEnd, piston.velocitySlot(), -a1);
+        e.inflowPartial(rodEnd, piston.velocitySlot(), a2);
+        if (internal != null) {
+            double g = AnnularLeakage.conductanceTimesViscosity(p.bore(), internal.clearance(), internal.length(), 0.0)
+                    / mu;
+            e.flow(capEnd, rodEnd, 0.0, g, -g);
+        }
+        if (external != null) {
+            double g = AnnularLeakage.conductanceTimesViscosity(p.rod(), external.clearance(), external.length(), 0.0)
+                    / mu;
+            e.inflowPartial(rodEnd, rodEnd, -g);
+        }
+        piston.forcePartial(e, capEnd, a1);
+        piston.forcePartial(e, rodEnd, -a2);
+        double tanh = Math.tanh(v / p.frictionVelocity());
+        double dFdv = -p.coulombFriction() * (1.0 - tanh * tanh) / p.frictionVelocity() - p.viscousFriction();
+        if (contact != null && x > contact.position()) {
+            dFdv -= contact.damping();
+            piston.forcePartial(e, piston.positionSlot(), -contact.stiffness());
+        }
+        piston.forcePartial(e, piston.velocitySlot(), dFdv);
+    }
+
     private double frictionForce(double v) {
         return p.coulombFriction() * Math.tanh(v / p.frictionVelocity()) + p.viscousFriction() * v;
     }
@@ -140,6 +171,11 @@ public final class Cylinder implements Element {
         double hydraulic = s.pressure(capEnd) * a1 - s.pressure(rodEnd) * a2;
         double external = -s.input(load) - frictionForce(v) - contactForce(x, v);
         return new Forces(hydraulic, 0.0, 0.0, 0.0, external);
+    }
+
+    @Override
+    public boolean suppliesPartials() {
+        return true;
     }
 
     @Override
@@ -160,6 +196,9 @@ public final class Cylinder implements Element {
         e.inflow(rodEnd, -qExternal);
         Forces f = forces(e);
         piston.apply(e, f);
+        if (e.partials()) {
+            addPartials(e, x, v);
+        }
         if (e.recording()) {
             double loadForce = e.input(load);
             double fc = contactForce(x, v);

@@ -1,6 +1,7 @@
 package org.branchsim.core.elements;
 
 import java.util.List;
+import org.branchsim.core.laws.OrificeLaw;
 import org.branchsim.core.model.Binder;
 import org.branchsim.core.model.Element;
 import org.branchsim.core.model.EnergyAccount;
@@ -34,7 +35,7 @@ public final class DirectReducingValve implements Element, ReducingValve {
     private final TravelLimitedMass spool;
     private final SpoolEndChamber.Bound end;
     private double density;
-    private double nu;
+    private double transitionConstant;
     private SignalHandle pOut;
     private SignalHandle qMain;
     private SignalHandle qDrain;
@@ -94,7 +95,7 @@ public final class DirectReducingValve implements Element, ReducingValve {
     @Override
     public void bind(Binder b) {
         density = b.fluid().density();
-        nu = b.fluid().kinematicViscosity();
+        transitionConstant = OrificeLaw.transitionConstant(edge.cd(), density, b.fluid().kinematicViscosity());
         spool.bind(b, s -> forces(s).net(), 0.05);
         if (end != null) {
             end.bind(b);
@@ -109,6 +110,31 @@ public final class DirectReducingValve implements Element, ReducingValve {
                 s -> edge.opening(spool.position(s))));
     }
 
+    /**
+     * The partials: metering flow dq/d(dp) and dq/dy = -dq/ds; displacement flows A_s per y'; the force's
+     * dF/dp_e = A_s, dF/dp_drain = -A_s, dF/dy = -k - dF_flow/ds, dF/dy' = -c, dF/dp_1 = -dF/dp_2 (flow force part)
+     * = dF_flow/d(dp).
+     */
+    private void addPartials(Evaluation e, double s, double dp) {
+        double slope = edge.flowPressureSlope(s, dp, density, transitionConstant);
+        e.flow(inlet, outlet, 0.0, slope, -slope);
+        e.flowPartial(inlet, outlet, spool.positionSlot(), -edge.flowOpeningSlope(s, dp, density, transitionConstant));
+        double as = edge.endArea();
+        if (end == null) {
+            e.inflowPartial(outlet, spool.velocitySlot(), -as);
+            spool.forcePartial(e, outlet, as);
+        } else {
+            spool.forcePartial(e, end.pressureSlot(), as);
+        }
+        e.inflowPartial(drain, spool.velocitySlot(), as);
+        spool.forcePartial(e, drain, -as);
+        double dFflow = edge.flowForcePressureSlope(s, dp);
+        spool.forcePartial(e, inlet, dFflow);
+        spool.forcePartial(e, outlet, -dFflow);
+        spool.forcePartial(e, spool.positionSlot(), -springRate - edge.flowForceOpeningSlope(s, dp));
+        spool.forcePartial(e, spool.velocitySlot(), -damping);
+    }
+
     private Forces forces(StateView s) {
         double y = spool.position(s);
         double p1 = s.pressure(inlet);
@@ -119,22 +145,30 @@ public final class DirectReducingValve implements Element, ReducingValve {
     }
 
     @Override
+    public boolean suppliesPartials() {
+        return true;
+    }
+
+    @Override
     public void evaluate(Evaluation e) {
         double p1 = e.pressure(inlet);
         double p2 = e.pressure(outlet);
         double y = spool.position(e);
         double ydot = spool.velocity(e);
         double s = edge.opening(y);
-        double qm = edge.flow(s, p1 - p2, density, nu);
+        double qm = edge.flowAt(s, p1 - p2, density, transitionConstant);
         double displaced = edge.endArea() * ydot;
         e.flow(inlet, outlet, qm);
         if (end == null) {
             e.inflow(outlet, -displaced);
         } else {
-            end.evaluate(e, y, ydot);
+            end.evaluate(e, y, ydot, spool.positionSlot(), spool.velocitySlot());
         }
         e.inflow(drain, displaced);
         spool.apply(e, forces(e));
+        if (e.partials()) {
+            addPartials(e, s, p1 - p2);
+        }
         if (e.recording()) {
             double pm = (p1 - p2) * qm;
             e.signal(pOut, p2);

@@ -57,17 +57,97 @@ public record MeteringEdge(double spoolDiameter, double width, double openLength
      * @return flow from inlet to outlet, m^3/s
      */
     public double flow(double s, double dp, double density, double nu) {
+        return flowAt(s, dp, density, OrificeLaw.transitionConstant(cd, density, nu));
+    }
+
+    /**
+     * The flow with the opening's laminar transition constant computed once by the caller: the edge's
+     * transition pressure is K / (2 s)^2 (hydraulic diameter twice the opening), the notch's pi K / (4 A_n).
+     *
+     * @param s edge opening, m
+     * @param dp inlet minus outlet pressure, Pa
+     * @param density kg/m^3
+     * @param transitionConstant K of {@link OrificeLaw#transitionConstant}, Pa m^2
+     * @return flow from inlet to outlet, m^3/s
+     */
+    public double flowAt(double s, double dp, double density, double transitionConstant) {
         double q = 0.0;
         double edge = edgeArea(s);
         if (edge > 0.0) {
-            q += OrificeLaw.flow(cd, edge, dp, density, OrificeLaw.transitionPressure(cd, 2.0 * s, density, nu));
+            q += OrificeLaw.flow(cd, edge, dp, density, edgeTransition(s, transitionConstant));
         }
         double notch = notchAreaAt(s);
         if (notch > 0.0) {
-            q += OrificeLaw.flow(cd, notch, dp, density,
-                    OrificeLaw.transitionPressure(cd, OrificeLaw.circularDiameter(notch), density, nu));
+            q += OrificeLaw.flow(cd, notch, dp, density, OrificeLaw.roundHoleTransition(transitionConstant, notch));
         }
         return q;
+    }
+
+    private static double edgeTransition(double s, double transitionConstant) {
+        return transitionConstant / (4.0 * s * s);
+    }
+
+    /** @return dq/d(dp) of {@link #flowAt}, m^3/(s Pa) */
+    public double flowPressureSlope(double s, double dp, double density, double transitionConstant) {
+        double slope = 0.0;
+        double edge = edgeArea(s);
+        if (edge > 0.0) {
+            slope += OrificeLaw.slope(cd, edge, dp, density, edgeTransition(s, transitionConstant));
+        }
+        double notch = notchAreaAt(s);
+        if (notch > 0.0) {
+            slope += OrificeLaw.slope(cd, notch, dp, density, OrificeLaw.roundHoleTransition(transitionConstant, notch));
+        }
+        return slope;
+    }
+
+    /**
+     * @return dq/ds of {@link #flowAt}, m^2/s: per path, dq/dA dA/ds + dq/d(dp_t) d(dp_t)/ds with dq/dA = q/A;
+     *         the edge's d(dp_t)/ds = -2 dp_t / s, the notch's d(dp_t)/ds = -dp_t / A_n dA_n/ds
+     */
+    public double flowOpeningSlope(double s, double dp, double density, double transitionConstant) {
+        double slope = 0.0;
+        double edge = edgeArea(s);
+        if (edge > 0.0) {
+            double dpT = edgeTransition(s, transitionConstant);
+            double q = OrificeLaw.flow(cd, edge, dp, density, dpT);
+            slope += q / edge * width + OrificeLaw.transitionSlope(cd, edge, dp, density, dpT) * (-2.0 * dpT / s);
+        }
+        double notch = notchAreaAt(s);
+        double notchSlope = notchAreaSlope(s);
+        if (notch > 0.0 && notchSlope != 0.0) {
+            double dpT = OrificeLaw.roundHoleTransition(transitionConstant, notch);
+            double q = OrificeLaw.flow(cd, notch, dp, density, dpT);
+            slope += (q / notch + OrificeLaw.transitionSlope(cd, notch, dp, density, dpT) * (-dpT / notch))
+                    * notchSlope;
+        }
+        return slope;
+    }
+
+    /** @return dA/ds of the notch, m: 2 A_n u / L_n while 0 < u < 1, else zero */
+    public double notchAreaSlope(double s) {
+        if (notchLength <= 0.0 || notchArea <= 0.0) {
+            return 0.0;
+        }
+        double u = (s + notchLength) / notchLength;
+        return u > 0.0 && u < 1.0 ? 2.0 * notchArea * u / notchLength : 0.0;
+    }
+
+    /** @return dA/ds of the total area, m: w (while the edge is open) plus the notch's slope */
+    public double areaSlope(double s) {
+        return (s > 0.0 ? width : 0.0) + notchAreaSlope(s);
+    }
+
+    /** @return dF/d(dp) of {@link #flowForce}, N/Pa */
+    public double flowForcePressureSlope(double s, double dp) {
+        return FlowForce.pressureSlopeAtCosine(cd, FlowForce.VELOCITY_COEFFICIENT, area(s), dp,
+                FlowForce.SPOOL_JET_COSINE);
+    }
+
+    /** @return dF/ds of {@link #flowForce}, N/m */
+    public double flowForceOpeningSlope(double s, double dp) {
+        return FlowForce.areaSlopeAtCosine(cd, FlowForce.VELOCITY_COEFFICIENT, dp, FlowForce.SPOOL_JET_COSINE)
+                * areaSlope(s);
     }
 
     /** @return steady flow force, N, pushing the spool towards closing */

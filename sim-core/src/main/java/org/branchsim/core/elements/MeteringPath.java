@@ -14,7 +14,8 @@ import org.branchsim.core.units.Dimension;
 /**
  * One metering path of a directional control valve (P to A, B to T, ...) whose opening follows a schedule:
  * A = u(t) A_max with u from 0 (closed) to 1 (fully open), flow by {@link OrificeLaw}, positive from a to b.
- * The hydraulic diameter of the opening is taken as that of a round hole of the same area.
+ * The hydraulic diameter of the opening is taken as that of a round hole of the same area. The opening follows
+ * time only, so the flow's partials are dq/dp_a = -dq/dp_b = the law's slope.
  */
 public final class MeteringPath implements Element {
     private final String id;
@@ -24,7 +25,7 @@ public final class MeteringPath implements Element {
     private final double cd;
     private final ScheduledInput opening;
     private double density;
-    private double nu;
+    private double transitionConstant;
     private SignalHandle q;
     private SignalHandle openingSignal;
     private EnergyAccount loss;
@@ -65,10 +66,15 @@ public final class MeteringPath implements Element {
     public void bind(Binder binder) {
         binder.input(opening);
         density = binder.fluid().density();
-        nu = binder.fluid().kinematicViscosity();
+        transitionConstant = OrificeLaw.transitionConstant(cd, density, binder.fluid().kinematicViscosity());
         q = binder.signal("q", Dimension.VOLUME_FLOW);
         openingSignal = binder.signal("opening", Dimension.DIMENSIONLESS);
         loss = binder.account("loss", EnergyAccount.Kind.LOSS);
+    }
+
+    @Override
+    public boolean suppliesPartials() {
+        return true;
     }
 
     @Override
@@ -77,11 +83,15 @@ public final class MeteringPath implements Element {
         double area = u * maxArea;
         double dp = e.pressure(a) - e.pressure(b);
         double flow = 0.0;
+        double slope = 0.0;
         if (area > 0.0) {
-            double dpT = OrificeLaw.transitionPressure(cd, OrificeLaw.circularDiameter(area), density, nu);
+            double dpT = OrificeLaw.roundHoleTransition(transitionConstant, area);
             flow = OrificeLaw.flow(cd, area, dp, density, dpT);
+            if (e.partials()) {
+                slope = OrificeLaw.slope(cd, area, dp, density, dpT);
+            }
         }
-        e.flow(a, b, flow);
+        e.flow(a, b, flow, slope, -slope);
         if (e.recording()) {
             e.signal(q, flow);
             e.signal(openingSignal, u);

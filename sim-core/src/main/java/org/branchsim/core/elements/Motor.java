@@ -15,6 +15,7 @@ import org.branchsim.core.units.Dimension;
  * Fixed-displacement hydraulic motor from port a to port b. Flow Q = D omega + K_L (p_a - p_b), with
  * D in m^3/rad and a laminar leakage conductance K_L; torque balance
  * J omega' = D (p_a - p_b) - B omega - T_load(t). Shaft speed omega, rad/s, positive when a is the inlet.
+ * Partials: dQ/dp_a = -dQ/dp_b = K_L, dQ/domega = D; d(omega')/dp_a = -d(omega')/dp_b = D/J, d(omega')/domega = -B/J.
  */
 public final class Motor implements Element {
     private final String id;
@@ -81,15 +82,26 @@ public final class Motor implements Element {
     }
 
     @Override
+    public boolean suppliesPartials() {
+        return true;
+    }
+
+    @Override
     public void evaluate(Evaluation e) {
         double w = e.value(omega);
         double dp = e.pressure(a) - e.pressure(b);
         double leak = leakageConductance * dp;
         double q = displacement * w + leak;
-        e.flow(a, b, q);
+        e.flow(a, b, q, leakageConductance, -leakageConductance);
         double tl = e.input(loadTorque);
         double accel = (displacement * dp - viscousDamping * w - tl) / inertia;
         e.derivative(omega, accel);
+        if (e.partials()) {
+            e.flowPartial(a, b, omega, displacement);
+            e.derivativePartial(omega, a, displacement / inertia);
+            e.derivativePartial(omega, b, -displacement / inertia);
+            e.derivativePartial(omega, omega, -viscousDamping / inertia);
+        }
         if (e.recording()) {
             e.signal(speedSignal, w);
             e.signal(qSignal, q);

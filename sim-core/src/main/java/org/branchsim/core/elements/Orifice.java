@@ -12,6 +12,7 @@ import org.branchsim.core.units.Dimension;
 
 /**
  * Fixed sharp-edged orifice between ports a and b, flow by {@link OrificeLaw}; positive from a to b.
+ * Partials: dq/dp_a = -dq/dp_b = the law's slope.
  */
 public final class Orifice implements Element {
     private final String id;
@@ -53,18 +54,28 @@ public final class Orifice implements Element {
     @Override
     public void bind(Binder binder) {
         density = binder.fluid().density();
-        dpTransition = OrificeLaw.transitionPressure(cd, OrificeLaw.circularDiameter(area), density,
-                binder.fluid().kinematicViscosity());
+        dpTransition = OrificeLaw.roundHoleTransition(OrificeLaw.transitionConstant(cd, density,
+                binder.fluid().kinematicViscosity()), area);
         q = binder.signal("q", Dimension.VOLUME_FLOW);
         dpSignal = binder.signal("dp", Dimension.PRESSURE);
         loss = binder.account("loss", EnergyAccount.Kind.LOSS);
     }
 
     @Override
+    public boolean suppliesPartials() {
+        return true;
+    }
+
+    @Override
     public void evaluate(Evaluation e) {
         double dp = e.pressure(a) - e.pressure(b);
         double flow = OrificeLaw.flow(cd, area, dp, density, dpTransition);
-        e.flow(a, b, flow);
+        if (e.partials()) {
+            double slope = OrificeLaw.slope(cd, area, dp, density, dpTransition);
+            e.flow(a, b, flow, slope, -slope);
+        } else {
+            e.flow(a, b, flow);
+        }
         if (e.recording()) {
             e.signal(q, flow);
             e.signal(dpSignal, dp);

@@ -61,7 +61,8 @@ public final class PilotReducingValve implements Element, ReducingValve {
     private final TravelLimitedMass poppet;
     private final SpoolEndChamber.Bound end;
     private double density;
-    private double nu;
+    private double edgeTransitionConstant;
+    private double seatTransitionConstant;
     private double orificeTransition;
     private Fluid fluid;
     private StateSlot chamber;
@@ -172,9 +173,11 @@ public final class PilotReducingValve implements Element, ReducingValve {
     public void bind(Binder b) {
         fluid = b.fluid();
         density = fluid.density();
-        nu = fluid.kinematicViscosity();
-        double d = OrificeLaw.circularDiameter(orificeArea);
-        orificeTransition = OrificeLaw.transitionPressure(orificeCd, d, density, nu);
+        double nu = fluid.kinematicViscosity();
+        edgeTransitionConstant = OrificeLaw.transitionConstant(main.edge().cd(), density, nu);
+        seatTransitionConstant = pilot.transitionConstant(density, nu);
+        orificeTransition = OrificeLaw.roundHoleTransition(OrificeLaw.transitionConstant(orificeCd, density, nu),
+                orificeArea);
         chamber = b.state("chamber.p", Dimension.PRESSURE, 0.0, 1e5);
         if (end != null) {
             end.bind(b);
@@ -203,6 +206,60 @@ public final class PilotReducingValve implements Element, ReducingValve {
         b.couple(chamber, poppet.positionSlot(), poppet.velocitySlot(), b.pressureOf(drain));
     }
 
+    /**
+     * Main stage partials: metering flow dq/d(dp) and dq/dy = -dq/ds; the outlet's displacement flow (no end
+     * chamber); the spool force's dF/dp_e = A_s, dF/dp_c = -A_s, dF/dy = -k_s - dF_flow/ds, dF/dy' = -c_s, and the
+     * flow force's dF_flow/d(dp) on p_1 and -p_2.
+     */
+    private void mainStagePartials(Evaluation e, double s, double dp) {
+        MeteringEdge edge = main.edge();
+        double slope = edge.flowPressureSlope(s, dp, density, edgeTransitionConstant);
+        e.flow(inlet, outlet, 0.0, slope, -slope);
+        e.flowPartial(inlet, outlet, spool.positionSlot(),
+                -edge.flowOpeningSlope(s, dp, density, edgeTransitionConstant));
+        double as = edge.endArea();
+        if (end == null) {
+            e.inflowPartial(outlet, spool.velocitySlot(), -as);
+            spool.forcePartial(e, outlet, as);
+        } else {
+            spool.forcePartial(e, end.pressureSlot(), as);
+        }
+        spool.forcePartial(e, chamber, -as);
+        double dFflow = edge.flowForcePressureSlope(s, dp);
+        spool.forcePartial(e, inlet, dFflow);
+        spool.forcePartial(e, outlet, -dFflow);
+        spool.forcePartial(e, spool.positionSlot(), -main.springRate() - edge.flowForceOpeningSlope(s, dp));
+        spool.forcePartial(e, spool.velocitySlot(), -main.damping());
+    }
+
+    /**
+     * Spring chamber partials of dp_c/dt = beta_e(p_c) / V_c Q_c, V_c = V_c0 - A_s y,
+     * Q_c = q_o - q_p + A_s y' - A_p x': beta/V_c dQ_c/dy_j, plus beta Q_c A_s / V_c^2 per y and
+     * beta'(p_c) Q_c / V_c per p_c.
+     */
+    private void chamberPartials(Evaluation e, double beta, double vc, double inflow, double dqo, double dqp,
+                                 double dqpdx) {
+        double as = main.edge().endArea();
+        double k = beta / vc;
+        e.derivativePartial(chamber, outlet, k * dqo);
+        e.derivativePartial(chamber, chamber, k * (-dqo - dqp)
+                + fluid.bulkModulusSlope(e.value(chamber), Double.POSITIVE_INFINITY) / vc * inflow);
+        e.derivativePartial(chamber, drain, k * dqp);
+        e.derivativePartial(chamber, poppet.positionSlot(), -k * dqpdx);
+        e.derivativePartial(chamber, spool.velocitySlot(), k * as);
+        e.derivativePartial(chamber, poppet.velocitySlot(), -k * pilot.seatArea());
+        e.derivativePartial(chamber, spool.positionSlot(), k * inflow * as / vc);
+    }
+
+    /** Pilot poppet force partials: dF/d(p_c - p_d) = A_p - dF_flow/d(dp), dF/dx = -k_p - dF_flow/dx, dF/dx' = -c_p. */
+    private void pilotPartials(Evaluation e, double x, double dp) {
+        double dFdp = pilot.seatArea() - pilot.flowForcePressureSlope(x, dp);
+        poppet.forcePartial(e, chamber, dFdp);
+        poppet.forcePartial(e, drain, -dFdp);
+        poppet.forcePartial(e, poppet.positionSlot(), -pilot.springRate() - pilot.flowForceLiftSlope(x, dp));
+        poppet.forcePartial(e, poppet.velocitySlot(), -pilot.damping());
+    }
+
     private Forces spoolForces(StateView s) {
         double y = spool.position(s);
         double v = spool.velocity(s);
@@ -224,6 +281,11 @@ public final class PilotReducingValve implements Element, ReducingValve {
     }
 
     @Override
+    public boolean suppliesPartials() {
+        return true;
+    }
+
+    @Override
     public void evaluate(Evaluation e) {
         double p1 = e.pressure(inlet);
         double p2 = e.pressure(outlet);
@@ -237,22 +299,37 @@ public final class PilotReducingValve implements Element, ReducingValve {
         double ap = pilot.seatArea();
 
         double s = main.edge().opening(y);
-        double qm = main.edge().flow(s, p1 - p2, density, nu);
+        double qm = main.edge().flowAt(s, p1 - p2, density, edgeTransitionConstant);
         e.flow(inlet, outlet, qm);
         double qo = OrificeLaw.flow(orificeCd, orificeArea, p2 - pc, density, orificeTransition);
-        double qp = pilot.flow(x, pc - pd, density, nu);
+        double qp = pilot.flowAt(x, pc - pd, density, seatTransitionConstant);
         e.inflow(outlet, -qo);
         if (end == null) {
             e.inflow(outlet, -as * ydot);
         } else {
-            end.evaluate(e, y, ydot);
+            end.evaluate(e, y, ydot, spool.positionSlot(), spool.velocitySlot());
         }
         e.inflow(drain, qp + ap * xdot);
         double chamberInflow = qo - qp + as * ydot - ap * xdot;
         double vc = chamberVolume - as * y;
-        e.derivative(chamber, Compressibility.pressureRate(fluid.effectiveBulkModulus(pc, Double.POSITIVE_INFINITY), vc, chamberInflow));
+        double beta = fluid.effectiveBulkModulus(pc, Double.POSITIVE_INFINITY);
+        e.derivative(chamber, Compressibility.pressureRate(beta, vc, chamberInflow));
         spool.apply(e, spoolForces(e));
         poppet.apply(e, poppetForces(e));
+        if (e.partials()) {
+            mainStagePartials(e, s, p1 - p2);
+            double dqo = OrificeLaw.slope(orificeCd, orificeArea, p2 - pc, density, orificeTransition);
+            double dqp = pilot.flowPressureSlope(x, pc - pd, density, seatTransitionConstant);
+            double dqpdx = pilot.flowLiftSlope(x, pc - pd, density, seatTransitionConstant);
+            e.inflowPartial(outlet, outlet, -dqo);
+            e.inflowPartial(outlet, chamber, dqo);
+            e.inflowPartial(drain, chamber, dqp);
+            e.inflowPartial(drain, drain, -dqp);
+            e.inflowPartial(drain, poppet.positionSlot(), dqpdx);
+            e.inflowPartial(drain, poppet.velocitySlot(), ap);
+            chamberPartials(e, beta, vc, chamberInflow, dqo, dqp, dqpdx);
+            pilotPartials(e, x, pc - pd);
+        }
         if (e.recording()) {
             e.signal(pIn, p1);
             e.signal(pOut, p2);

@@ -96,17 +96,76 @@ public final class PoppetGeometry {
      * @return flow through the seat, m^3/s, positive with dp
      */
     public double flow(double lift, double dp, double density, double nu) {
+        return flowAt(lift, dp, density, OrificeLaw.transitionConstant(cd, density, nu));
+    }
+
+    /**
+     * The seat flow with the laminar transition constant K computed once by the caller: the gap's transition
+     * pressure is K / d_h^2, d_h = 2 x sin(alpha/2).
+     *
+     * @param lift lift, m
+     * @param dp pressure difference across the seat, Pa
+     * @param density kg/m^3
+     * @param transitionConstant K of {@link OrificeLaw#transitionConstant}, Pa m^2
+     * @return flow through the seat, m^3/s, positive with dp
+     */
+    public double flowAt(double lift, double dp, double density, double transitionConstant) {
         double a = area(lift);
         if (a <= 0.0) {
             return 0.0;
         }
+        return OrificeLaw.flow(cd, a, dp, density, gapTransition(lift, transitionConstant));
+    }
+
+    private double gapTransition(double lift, double transitionConstant) {
         double dh = seat.gapHydraulicDiameter(lift);
-        return OrificeLaw.flow(cd, a, dp, density, OrificeLaw.transitionPressure(cd, dh, density, nu));
+        return transitionConstant / (dh * dh);
+    }
+
+    /** @return the transition constant of this poppet's seat for a fluid, Pa m^2 */
+    public double transitionConstant(double density, double nu) {
+        return OrificeLaw.transitionConstant(cd, density, nu);
+    }
+
+    /** @return dq/d(dp) of {@link #flowAt}, m^3/(s Pa) */
+    public double flowPressureSlope(double lift, double dp, double density, double transitionConstant) {
+        double a = area(lift);
+        if (a <= 0.0) {
+            return 0.0;
+        }
+        return OrificeLaw.slope(cd, a, dp, density, gapTransition(lift, transitionConstant));
+    }
+
+    /**
+     * @return dq/dx of {@link #flowAt}, m^2/s: q/A dA/dx + dq/d(dp_t) d(dp_t)/dx, with d(dp_t)/dx = -2 dp_t / d_h
+     *         d(d_h)/dx
+     */
+    public double flowLiftSlope(double lift, double dp, double density, double transitionConstant) {
+        double a = area(lift);
+        if (a <= 0.0) {
+            return 0.0;
+        }
+        double dpT = gapTransition(lift, transitionConstant);
+        double q = OrificeLaw.flow(cd, a, dp, density, dpT);
+        double dh = seat.gapHydraulicDiameter(lift);
+        return q / a * seat.areaSlope(lift)
+                + OrificeLaw.transitionSlope(cd, a, dp, density, dpT) * (-2.0 * dpT / dh)
+                * seat.gapHydraulicDiameterSlope(lift);
     }
 
     /** @return steady flow force closing the poppet, N; the jet leaves at half the cone angle to the axis */
     public double flowForce(double lift, double dp) {
         return FlowForce.closingForceAtCosine(cd, FlowForce.VELOCITY_COEFFICIENT, area(lift), dp, jetCosine);
+    }
+
+    /** @return dF/d(dp) of {@link #flowForce}, N/Pa */
+    public double flowForcePressureSlope(double lift, double dp) {
+        return FlowForce.pressureSlopeAtCosine(cd, FlowForce.VELOCITY_COEFFICIENT, area(lift), dp, jetCosine);
+    }
+
+    /** @return dF/dx of {@link #flowForce}, N/m */
+    public double flowForceLiftSlope(double lift, double dp) {
+        return FlowForce.areaSlopeAtCosine(cd, FlowForce.VELOCITY_COEFFICIENT, dp, jetCosine) * seat.areaSlope(lift);
     }
 
     /** @return a copy with a different preload, N */

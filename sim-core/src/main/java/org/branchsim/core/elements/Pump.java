@@ -13,7 +13,8 @@ import org.branchsim.core.units.Dimension;
 /**
  * Fixed-displacement pump driven at a scheduled shaft speed: Q = eta_v D omega from inlet to outlet, with
  * D in m^3/rad, omega in rad/s and eta_v the volumetric efficiency, taken as constant (the usual catalogue
- * figure at working pressure). Hydraulic power delivered: (p_out - p_in) Q.
+ * figure at working pressure). Hydraulic power delivered: (p_out - p_in) Q. The delivery depends on no state, so
+ * every partial derivative is zero.
  */
 public final class Pump implements Element {
     private final String id;
@@ -64,6 +65,11 @@ public final class Pump implements Element {
         q = b.signal("q", Dimension.VOLUME_FLOW);
         speedSignal = b.signal("speed", Dimension.ROTATIONAL_SPEED);
         supply = b.account("delivered", EnergyAccount.Kind.SUPPLY);
+    }
+
+    @Override
+    public boolean suppliesPartials() {
+        return true;
     }
 
     @Override

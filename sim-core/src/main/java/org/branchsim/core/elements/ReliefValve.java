@@ -25,7 +25,7 @@ public final class ReliefValve implements Element {
     private final PoppetGeometry poppet;
     private final TravelLimitedMass member;
     private double density;
-    private double nu;
+    private double transitionConstant;
     private SignalHandle q;
     private EnergyAccount loss;
 
@@ -61,10 +61,28 @@ public final class ReliefValve implements Element {
     @Override
     public void bind(Binder b) {
         density = b.fluid().density();
-        nu = b.fluid().kinematicViscosity();
+        transitionConstant = poppet.transitionConstant(density, b.fluid().kinematicViscosity());
         member.bind(b, s -> forces(s).net(), 0.1);
         q = b.signal("q", Dimension.VOLUME_FLOW);
         loss = b.account("loss", EnergyAccount.Kind.LOSS);
+    }
+
+    /**
+     * The partials: the seat flow's dq/d(dp) and dq/dx, the displacement flow's A_s, and the force's
+     * dF/d(dp) = A_s - dF_flow/d(dp), dF/dx = -k - dF_flow/dx, dF/dv = -c.
+     */
+    private void addPartials(Evaluation e, double x, double dp) {
+        double slope = poppet.flowPressureSlope(x, dp, density, transitionConstant);
+        e.flow(inlet, outlet, 0.0, slope, -slope);
+        e.flowPartial(inlet, outlet, member.positionSlot(), poppet.flowLiftSlope(x, dp, density, transitionConstant));
+        double as = poppet.seatArea();
+        e.inflowPartial(inlet, member.velocitySlot(), -as);
+        e.inflowPartial(outlet, member.velocitySlot(), as);
+        double dFdp = as - poppet.flowForcePressureSlope(x, dp);
+        member.forcePartial(e, inlet, dFdp);
+        member.forcePartial(e, outlet, -dFdp);
+        member.forcePartial(e, member.positionSlot(), -poppet.springRate() - poppet.flowForceLiftSlope(x, dp));
+        member.forcePartial(e, member.velocitySlot(), -poppet.damping());
     }
 
     private Forces forces(StateView s) {
@@ -76,16 +94,24 @@ public final class ReliefValve implements Element {
     }
 
     @Override
+    public boolean suppliesPartials() {
+        return true;
+    }
+
+    @Override
     public void evaluate(Evaluation e) {
         double x = member.position(e);
         double v = member.velocity(e);
         double dp = e.pressure(inlet) - e.pressure(outlet);
-        double flow = poppet.flow(x, dp, density, nu);
+        double flow = poppet.flowAt(x, dp, density, transitionConstant);
         e.flow(inlet, outlet, flow);
         double displaced = poppet.seatArea() * v;
         e.inflow(inlet, -displaced);
         e.inflow(outlet, displaced);
         member.apply(e, forces(e));
+        if (e.partials()) {
+            addPartials(e, x, dp);
+        }
         if (e.recording()) {
             e.signal(q, flow);
             e.power(loss, dp * flow);

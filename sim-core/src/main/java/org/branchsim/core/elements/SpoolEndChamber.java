@@ -66,15 +66,31 @@ public record SpoolEndChamber(double deadVolume, double orificeDiameter, double 
             return s.value(pressure);
         }
 
-        /** Adds the orifice flow to the outlet and sets the chamber's pressure derivative. */
-        void evaluate(Evaluation e, double travel, double velocity) {
+        /**
+         * Adds the orifice flow to the outlet and sets the chamber's pressure derivative; with partials, those of
+         * q (dq/dp_2 = -dq/dp_e = the orifice slope) and of dp_e/dt = beta_e(p_e) / V (q - A_s y'),
+         * V = V_e0 + A_s y: beta/V dq/dp_2, -beta/V dq/dp_e + beta'(p_e) (q - A_s y') / V, -beta A_s / V (per y'),
+         * -beta (q - A_s y') A_s / V^2 (per y).
+         */
+        void evaluate(Evaluation e, double travel, double velocity, StateSlot travelSlot, StateSlot velocitySlot) {
             double p2 = e.pressure(outlet);
             double pe = e.value(pressure);
             double q = OrificeLaw.flow(spec.cd(), area, p2 - pe, fluid.density(), transition);
             e.inflow(outlet, -q);
             double inflow = q - endArea * velocity;
             double v = spec.deadVolume() + endArea * travel;
-            e.derivative(pressure, Compressibility.pressureRate(fluid.effectiveBulkModulus(pe, Double.POSITIVE_INFINITY), v, inflow));
+            double beta = fluid.effectiveBulkModulus(pe, Double.POSITIVE_INFINITY);
+            e.derivative(pressure, Compressibility.pressureRate(beta, v, inflow));
+            if (e.partials()) {
+                double slope = OrificeLaw.slope(spec.cd(), area, p2 - pe, fluid.density(), transition);
+                e.inflowPartial(outlet, outlet, -slope);
+                e.inflowPartial(outlet, pressure, slope);
+                e.derivativePartial(pressure, outlet, beta / v * slope);
+                e.derivativePartial(pressure, pressure, -beta / v * slope
+                        + fluid.bulkModulusSlope(pe, Double.POSITIVE_INFINITY) / v * inflow);
+                e.derivativePartial(pressure, velocitySlot, -beta / v * endArea);
+                e.derivativePartial(pressure, travelSlot, -beta * inflow * endArea / (v * v));
+            }
             if (e.recording()) {
                 e.signal(pressureSignal, pe);
                 e.signal(flowSignal, q);

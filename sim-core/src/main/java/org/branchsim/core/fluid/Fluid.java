@@ -18,6 +18,10 @@ public final class Fluid {
     private final double airFraction;
     private final double gasExponent;
     private final double temperature;
+    /** 1 / n, computed once. */
+    private final double inverseExponent;
+    /** 1 / beta_oil, Pa^-1, computed once. */
+    private final double oilCompliance;
 
     /**
      * @param density density at the working temperature, kg/m^3
@@ -35,6 +39,8 @@ public final class Fluid {
         this.airFraction = airFraction;
         this.gasExponent = gasExponent;
         this.temperature = temperature;
+        this.inverseExponent = 1.0 / gasExponent;
+        this.oilCompliance = 1.0 / oilBulkModulus;
     }
 
     /**
@@ -83,15 +89,59 @@ public final class Fluid {
      */
     public double effectiveBulkModulus(double gaugePressure, double wallBulkModulus) {
         double pAbs = gaugePressure + Units.ATMOSPHERE;
-        double compliance = 1.0 / oilBulkModulus + 1.0 / wallBulkModulus;
+        double compliance = oilCompliance + 1.0 / wallBulkModulus;
         if (airFraction > 0.0) {
             double pGas = Math.max(pAbs, 1.0);
-            double ratio = Units.ATMOSPHERE / pGas;
-            double gasVolume = airFraction * (gasExponent == 1.0 ? ratio : Math.pow(ratio, 1.0 / gasExponent));
+            double gasVolume = gasVolume(pGas);
             double fraction = gasVolume / (1.0 - airFraction + gasVolume);
             compliance += fraction / (gasExponent * pGas);
         }
         return softened(pAbs) / compliance;
+    }
+
+    /**
+     * The slope d(beta_e)/dp of {@link #effectiveBulkModulus} in closed form (docs/theory.md section 10.x): with
+     * the compliance C(p) = 1/beta_oil + 1/beta_wall + phi(p) / (n p) and the softening factor S(p_abs),
+     * beta_e = S / C and d(beta_e)/dp = S'/C - S C'/C^2, where the gas volume g = a (p_atm/p)^(1/n) gives
+     * dg/dp = -g / (n p), phi = g / (1 - a + g) gives dphi/dp = (1 - a) / (1 - a + g)^2 dg/dp, and
+     * C' = dphi/dp / (n p) - phi / (n p^2). Below 1 Pa absolute the gas law is frozen (slope zero there).
+     *
+     * @param gaugePressure node pressure, Pa gauge
+     * @param wallBulkModulus bulk modulus of the wall, Pa; infinite for a rigid wall
+     * @return d(beta_e)/dp, dimensionless (Pa per Pa)
+     */
+    public double bulkModulusSlope(double gaugePressure, double wallBulkModulus) {
+        double pAbs = gaugePressure + Units.ATMOSPHERE;
+        double compliance = oilCompliance + 1.0 / wallBulkModulus;
+        double complianceSlope = 0.0;
+        if (airFraction > 0.0) {
+            double pGas = Math.max(pAbs, 1.0);
+            double g = gasVolume(pGas);
+            double denominator = 1.0 - airFraction + g;
+            double fraction = g / denominator;
+            compliance += fraction / (gasExponent * pGas);
+            if (pAbs > 1.0) {
+                double gSlope = -g * inverseExponent / pGas;
+                double fractionSlope = (1.0 - airFraction) / (denominator * denominator) * gSlope;
+                complianceSlope = fractionSlope / (gasExponent * pGas) - fraction / (gasExponent * pGas * pGas);
+            }
+        }
+        double factor = softened(pAbs);
+        return softenedSlope(pAbs) / compliance - factor * complianceSlope / (compliance * compliance);
+    }
+
+    /** @return the volume fraction the entrained air takes at absolute pressure pGas, relative to its amount */
+    private double gasVolume(double pGas) {
+        double ratio = Units.ATMOSPHERE / pGas;
+        return airFraction * (gasExponent == 1.0 ? ratio : Math.pow(ratio, inverseExponent));
+    }
+
+    private static double softenedSlope(double pAbs) {
+        if (pAbs >= 20.0 * CAVITATION_SCALE || pAbs <= 0.0) {
+            return 0.0;
+        }
+        double e = Math.exp(-pAbs / CAVITATION_SCALE);
+        return -Math.expm1(-pAbs / CAVITATION_SCALE) > 1e-4 ? e / CAVITATION_SCALE : 0.0;
     }
 
     private static double softened(double pAbs) {

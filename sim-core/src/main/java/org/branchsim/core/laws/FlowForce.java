@@ -43,4 +43,17 @@ public final class FlowForce {
     public static double closingForceAtCosine(double cd, double cv, double area, double dp, double jetCosine) {
         return 2.0 * cd * cv * area * Math.abs(dp) * jetCosine;
     }
+
+    /**
+     * @return dF/d(dp) of {@link #closingForceAtCosine}, N/Pa: 2 Cd Cv A sign(dp) cos(theta) (zero at dp = 0, where
+     *         the law has a corner and either one-sided slope is +-2 Cd Cv A cos(theta))
+     */
+    public static double pressureSlopeAtCosine(double cd, double cv, double area, double dp, double jetCosine) {
+        return 2.0 * cd * cv * area * Math.signum(dp) * jetCosine;
+    }
+
+    /** @return dF/dA of {@link #closingForceAtCosine}, N/m^2: 2 Cd Cv |dp| cos(theta) */
+    public static double areaSlopeAtCosine(double cd, double cv, double dp, double jetCosine) {
+        return 2.0 * cd * cv * Math.abs(dp) * jetCosine;
+    }
 }

@@ -10,6 +10,13 @@ package org.branchsim.core.laws;
  * transition pressure is chosen at the Reynolds number where delta sqrt(Re) = Cd:
  * dp_t = rho/2 (Re_t nu / (Cd d_h))^2 with Re_t = (Cd/delta)^2 (delta about 0.2, from memory, quoted by Merritt).
  * Flow is positive from the upstream port (dp = p_a - p_b > 0).
+ *
+ * <p>Partial derivatives in closed form (docs/theory.md section 10.x), with k = Cd A sqrt(2/rho) and
+ * r = dp^2 + dp_t^2: dQ/d(dp) = k (dp^2/2 + dp_t^2) / r^(5/4) (finite at dp = 0, where it is the laminar
+ * conductance k / sqrt(dp_t)); dQ/dA = Q / A; dQ/d(dp_t) = -k dp dp_t / (2 r^(5/4)). The transition pressure
+ * of an opening of hydraulic diameter d_h is dp_t = K / d_h^2 with K = rho/2 (Re_t nu / Cd)^2 a constant of the
+ * opening and the fluid ({@link #transitionConstant}), so an element computes K once and no transcendental
+ * function is evaluated per call; for a round hole of area A, d_h^2 = 4 A / pi and dp_t = pi K / (4 A).
  */
 public final class OrificeLaw {
 
@@ -28,9 +35,29 @@ public final class OrificeLaw {
      */
     public static double transitionPressure(double cd, double hydraulicDiameter, double density,
                                             double kinematicViscosity) {
+        return transitionConstant(cd, density, kinematicViscosity) / (hydraulicDiameter * hydraulicDiameter);
+    }
+
+    /**
+     * @param cd discharge coefficient in the turbulent range
+     * @param density fluid density, kg/m^3
+     * @param kinematicViscosity kinematic viscosity, m^2/s
+     * @return K = rho/2 (Re_t nu / Cd)^2, Pa m^2, so that the transition pressure of an opening of hydraulic
+     *         diameter d_h is K / d_h^2
+     */
+    public static double transitionConstant(double cd, double density, double kinematicViscosity) {
         double reT = (cd / LAMINAR_DELTA) * (cd / LAMINAR_DELTA);
-        double v = reT * kinematicViscosity / (cd * hydraulicDiameter);
+        double v = reT * kinematicViscosity / cd;
         return 0.5 * density * v * v;
+    }
+
+    /**
+     * @param transitionConstant K of {@link #transitionConstant}, Pa m^2
+     * @param area area of a round hole, m^2 (positive)
+     * @return the transition pressure pi K / (4 A) of a round hole of that area, Pa
+     */
+    public static double roundHoleTransition(double transitionConstant, double area) {
+        return 0.25 * Math.PI * transitionConstant / area;
     }
 
     /**
@@ -43,6 +70,34 @@ public final class OrificeLaw {
      */
     public static double flow(double cd, double area, double dp, double density, double dpTransition) {
         return cd * area * Math.sqrt(2.0 / density) * dp / Math.sqrt(Math.sqrt(dp * dp + dpTransition * dpTransition));
+    }
+
+    /**
+     * @param cd discharge coefficient
+     * @param area flow area, m^2 (zero or positive)
+     * @param dp pressure difference p_a - p_b, Pa
+     * @param density fluid density, kg/m^3
+     * @param dpTransition transition pressure difference, Pa (positive)
+     * @return dQ/d(dp), m^3/(s Pa): k (dp^2/2 + dp_t^2) / (dp^2 + dp_t^2)^(5/4)
+     */
+    public static double slope(double cd, double area, double dp, double density, double dpTransition) {
+        double r = dp * dp + dpTransition * dpTransition;
+        double quarter = Math.sqrt(Math.sqrt(r));
+        return cd * area * Math.sqrt(2.0 / density) * (0.5 * dp * dp + dpTransition * dpTransition) / (r * quarter);
+    }
+
+    /**
+     * @param cd discharge coefficient
+     * @param area flow area, m^2 (zero or positive)
+     * @param dp pressure difference p_a - p_b, Pa
+     * @param density fluid density, kg/m^3
+     * @param dpTransition transition pressure difference, Pa (positive)
+     * @return dQ/d(dp_t), m^3/(s Pa): -k dp dp_t / (2 (dp^2 + dp_t^2)^(5/4))
+     */
+    public static double transitionSlope(double cd, double area, double dp, double density, double dpTransition) {
+        double r = dp * dp + dpTransition * dpTransition;
+        double quarter = Math.sqrt(Math.sqrt(r));
+        return -cd * area * Math.sqrt(2.0 / density) * dp * dpTransition / (2.0 * r * quarter);
     }
 
     /**

@@ -54,6 +54,26 @@ public final class PoppetSeat {
         return Math.PI * seatDiameter * x * sinHalf * (1.0 - x * sinFull / (2.0 * seatDiameter));
     }
 
+    /**
+     * @param lift poppet lift x, m
+     * @return dA/dx, m: pi d sin(alpha/2) (1 - x sin(alpha) / d) for a cone, pi d for a flat seat, between the
+     *         seat and the useful lift; zero outside (the area is constant there)
+     */
+    public double areaSlope(double lift) {
+        if (lift <= 0.0 || lift >= usefulLift) {
+            return 0.0;
+        }
+        if (flat) {
+            return Math.PI * seatDiameter;
+        }
+        return Math.PI * seatDiameter * sinHalf * (1.0 - lift * sinFull / seatDiameter);
+    }
+
+    /** @return d(d_h)/dx of {@link #gapHydraulicDiameter}: 2 sin(alpha/2) above the smallest gap lift, else zero */
+    public double gapHydraulicDiameterSlope(double lift) {
+        return lift > MIN_GAP_LIFT ? 2.0 * sinHalf : 0.0;
+    }
+
     /** @return the hydraulic diameter of the annular gap, twice the gap width x sin(alpha/2), m */
     public double gapHydraulicDiameter(double lift) {
         return 2.0 * sinHalf * Math.max(lift, MIN_GAP_LIFT);

@@ -30,6 +30,12 @@ public final class CircuitModel {
     private final EnergyAccount compressionAccount;
     private final EnergyAccount[] tankAccounts;
     private final List<int[]> couplings;
+    /** Per element: its own states and its ports' pressure states (positions in the state vector). */
+    private final int[][] elementColumns;
+    /** Per element: its own states. */
+    private final int[][] elementRows;
+    /** Typical magnitude of each state, SI. */
+    private final double[] typical;
 
     CircuitModel(String name, Fluid fluid, List<Node> nodes, List<Element> elements, List<StateSlot> states,
                  double[] initialState, List<SignalHandle> signals, List<EnergyAccount> accounts,
@@ -59,6 +65,55 @@ public final class CircuitModel {
             blocks.add(block.clone());
         }
         this.couplings = Collections.unmodifiableList(blocks);
+        this.elementRows = new int[this.elements.length][];
+        this.elementColumns = new int[this.elements.length][];
+        ownStates();
+        this.typical = new double[this.states.size()];
+        for (int i = 0; i < typical.length; i++) {
+            typical[i] = this.states.get(i).absoluteScale();
+        }
+    }
+
+    /**
+     * Finds each element's own states: binding declares them contiguously, element by element, after the node
+     * pressures, each named with the element's id as prefix.
+     */
+    private void ownStates() {
+        int cursor = 0;
+        while (cursor < states.size() && cursor < nodes.length && isNodePressure(states.get(cursor))) {
+            cursor++;
+        }
+        for (int k = 0; k < elements.length; k++) {
+            String prefix = elements[k].id() + ".";
+            int first = cursor;
+            while (cursor < states.size() && states.get(cursor).name().startsWith(prefix)) {
+                cursor++;
+            }
+            int[] rows = new int[cursor - first];
+            for (int i = 0; i < rows.length; i++) {
+                rows[i] = first + i;
+            }
+            List<Integer> columns = new ArrayList<>();
+            for (Node port : elements[k].ports()) {
+                if (!port.isTank() && !columns.contains(port.pressureSlot().index())) {
+                    columns.add(port.pressureSlot().index());
+                }
+            }
+            for (int r : rows) {
+                columns.add(r);
+            }
+            elementRows[k] = rows;
+            elementColumns[k] = columns.stream().mapToInt(Integer::intValue).toArray();
+        }
+    }
+
+    private boolean isNodePressure(StateSlot slot) {
+        for (Node n : nodes) {
+            if (!n.isTank() && n.pressureSlot() == slot) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** @return the circuit's (scenario's) name */
@@ -189,11 +244,78 @@ public final class CircuitModel {
      * @return the work buffer
      */
     public Evaluation workspace(Member.Mode[] modes, double[] impulses) {
+        checkRunArrays(modes, impulses);
+        return new Evaluation(nodes, modes, impulses);
+    }
+
+    private void checkRunArrays(Member.Mode[] modes, double[] impulses) {
         if (modes.length != members.size() || impulses.length != accounts.size()) {
             throw new IllegalArgumentException("a run of " + name + " needs " + members.size() + " member modes and "
                     + accounts.size() + " impulse accounts, found " + modes.length + " and " + impulses.length);
         }
-        return new Evaluation(nodes, modes, impulses);
+    }
+
+    /**
+     * The Jacobian work buffers of one run (the solver's per-run engine holds them), sharing the run's member
+     * modes and impulse ledger like {@link #workspace}.
+     */
+    public JacobianWorkspace jacobianWorkspace(Member.Mode[] modes, double[] impulses) {
+        checkRunArrays(modes, impulses);
+        return new JacobianWorkspace(nodes, modes, impulses, typical);
+    }
+
+    /**
+     * The Jacobian df/dy of the equations at (t, y), with the run's member modes, assembled from the elements'
+     * closed-form partials (finite differences of an element's own contributions for an element that does not
+     * supply them, {@link JacobianWorkspace}) and the nodes' equation
+     * dp/dt = beta_e(p) / V * Q, V = V_0 + sum of boundary volumes, Q = sum of inflows:
+     * d(dp/dt)/dy_j = beta_e / V * dQ/dy_j - beta_e Q / V^2 * dV/dy_j, plus beta_e'(p) Q / V on the diagonal
+     * ({@link Fluid#bulkModulusSlope}). Held members' rows are zero (their position and velocity are fixed while
+     * held). Allocates nothing.
+     *
+     * @param w the run's Jacobian work buffers
+     * @param t time, s
+     * @param y state, SI (not changed)
+     * @param jac output, n x n: jac[i][j] = df_i/dy_j, row i in state i's SI unit per second, column j per SI
+     *        unit of state j; every entry is written
+     */
+    public void jacobian(JacobianWorkspace w, double t, double[] y, double[][] jac) {
+        Evaluation e = w.collecting;
+        e.resetForPartials(t, y, w.rates, jac, w.inflowPartials, w.volumePartials);
+        for (Element element : elements) {
+            if (element.suppliesPartials()) {
+                element.evaluate(e);
+            } else {
+                e.pausePartials();
+                element.evaluate(e);
+                e.resumePartials();
+            }
+        }
+        for (int k = 0; k < elements.length; k++) {
+            if (!elements[k].suppliesPartials()) {
+                w.differences(elements[k], elementColumns[k], elementRows[k], t, y, jac);
+            }
+        }
+        for (Node n : nodes) {
+            if (n.isTank()) {
+                continue;
+            }
+            int k = n.index();
+            int row = n.pressureSlot().index();
+            double p = e.pressure(n);
+            double inflow = e.inflowOf(k);
+            double v = n.volume() + e.extraVolumeOf(k);
+            double beta = fluid.effectiveBulkModulus(p, n.wallBulkModulus());
+            double[] dq = w.inflowPartials[k];
+            double[] dv = w.volumePartials[k];
+            double[] out = jac[row];
+            double betaOverV = beta / v;
+            double volumeTerm = betaOverV * inflow / v;
+            for (int j = 0; j < out.length; j++) {
+                out[j] = betaOverV * dq[j] - volumeTerm * dv[j];
+            }
+            out[row] += fluid.bulkModulusSlope(p, n.wallBulkModulus()) / v * inflow;
+        }
     }
 
     /**

@@ -27,4 +27,18 @@ public interface Element {
      * evaluation records, its signals and powers.
      */
     void evaluate(Evaluation evaluation);
+
+    /**
+     * Whether this element adds the partial derivatives of everything it adds (flows, inflows, volumes, its
+     * states' derivatives) with respect to every state and node pressure they depend on, when the evaluation
+     * collects them ({@link Evaluation#partials()}), through the evaluation's partial adders. Partials with
+     * respect to time are not asked for. An element that does not (the default) has its block of the Jacobian
+     * estimated by central differences of its own contributions, perturbing only its own states and its ports'
+     * pressures and evaluating only itself.
+     *
+     * @return true when {@link #evaluate} adds every partial derivative in closed form
+     */
+    default boolean suppliesPartials() {
+        return false;
+    }
 }

@@ -7,6 +7,7 @@ import org.branchsim.core.model.EnergyAccount;
 import org.branchsim.core.model.Evaluation;
 import org.branchsim.core.model.Member;
 import org.branchsim.core.model.ModeSlot;
+import org.branchsim.core.model.Node;
 import org.branchsim.core.model.SignalHandle;
 import org.branchsim.core.model.StateEditor;
 import org.branchsim.core.model.StateSlot;
@@ -160,12 +161,34 @@ public final class TravelLimitedMass implements Member {
                 e.power(damping, -forces.damping() * vel);
                 e.power(flowForce, -forces.flow() * vel);
             }
+            e.derivativePartial(x, v, 1.0);
         } else {
             e.derivative(x, 0.0);
             e.derivative(v, 0.0);
         }
         e.signal(xSignal, e.value(x));
         e.signal(vSignal, vel);
+    }
+
+    /**
+     * Adds dF/d(state) of the net force to the Jacobian: d(dv/dt)/d(state) = (dF/d(state)) / m while free; nothing
+     * while held (the rows of a held member are zero: its position and velocity do not change).
+     *
+     * @param e the evaluation (ignored unless it collects partials)
+     * @param wrt the state
+     * @param dForce dF/d(state), N per SI unit of the state
+     */
+    public void forcePartial(Evaluation e, StateSlot wrt, double dForce) {
+        if (e.partials() && e.mode(modeSlot) == Mode.FREE) {
+            e.derivativePartial(v, wrt, dForce / mass);
+        }
+    }
+
+    /** As {@link #forcePartial(Evaluation, StateSlot, double)} with respect to a node's pressure, dF/dp in N/Pa. */
+    public void forcePartial(Evaluation e, Node wrt, double dForce) {
+        if (e.partials() && e.mode(modeSlot) == Mode.FREE) {
+            e.derivativePartial(v, wrt, dForce / mass);
+        }
     }
 
     /** The event of one stop: reaching it while free, or leaving it while held. */

@@ -23,6 +23,7 @@ final class IntegratorFactory {
                 RosenbrockIntegrator r = new RosenbrockIntegrator(s.minStep(), s.maxStep(), absTol, relTol,
                         SparsityPattern.ofBlocks(circuit.dimension(), circuit.couplings()), JACOBIAN_MAX_AGE);
                 r.setTimeDependence(circuit::timeDependentAt);
+                r.setJacobianSource(new ElementJacobian(circuit));
                 return r;
             case REFERENCE:
                 return new DormandPrince853Integrator(s.minStep(), s.maxStep(), absTol, relTol);

@@ -10,6 +10,7 @@ import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
 import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.Evaluation;
+import org.branchsim.core.model.JacobianWorkspace;
 import org.branchsim.core.model.Member;
 import org.branchsim.core.model.StateEditor;
 import org.branchsim.core.model.StateSlot;
@@ -32,6 +33,7 @@ final class RunEngine {
     private final Evaluation viewWork;
     private final Evaluation editWork;
     private final Map<StateSlot, Integer> positions;
+    private JacobianWorkspace jacobianWork;
     private long evaluations;
 
     /** @param model the model to run; every member starts free, the impulse ledger empty */
@@ -77,6 +79,50 @@ final class RunEngine {
     void derivatives(double t, double[] y, double[] yDot) {
         evaluations++;
         model.evaluate(work, t, y, yDot, null, null);
+    }
+
+    /**
+     * The Jacobian df/dy at (t, y) with the run's member modes, from the elements' partials
+     * ({@link CircuitModel#jacobian}); not counted as an evaluation. Its buffers are allocated on the first call.
+     *
+     * @param t time, s
+     * @param y state, SI (not changed)
+     * @param jac output, n x n, every entry written
+     */
+    void jacobian(double t, double[] y, double[][] jac) {
+        if (jacobianWork == null) {
+            jacobianWork = model.jacobianWorkspace(modes, impulses);
+        }
+        model.jacobian(jacobianWork, t, y, jac);
+    }
+
+    /**
+     * Sets every member's mode from a state and its derivative alone, for a Jacobian source that is not handed
+     * the run's modes: a member is held when the derivatives of its position and velocity are both exactly zero
+     * (a held member's equations give exactly that) and its position lies within {@link Member#STOP_TOLERANCE}
+     * of the travel from a stop; free otherwise. A free member has dx/dt = v and dv/dt = F/m, both exactly zero
+     * only when it rests with exactly zero net force; taken as held then, its rows differ from the free ones only
+     * by dv/dt's dependence on the states, which the next Jacobian corrects.
+     *
+     * @param y state, SI
+     * @param f0 f(t, y), SI per second
+     */
+    void inferModes(double[] y, double[] f0) {
+        for (int k = 0; k < modes.length; k++) {
+            Member m = members.get(k);
+            int x = position(m.positionSlot());
+            int v = position(m.velocitySlot());
+            double slack = Member.STOP_TOLERANCE * (m.upper() - m.lower());
+            Member.Mode mode = Member.Mode.FREE;
+            if (f0[x] == 0.0 && f0[v] == 0.0) {
+                if (y[x] <= m.lower() + slack) {
+                    mode = Member.Mode.AT_LOWER_STOP;
+                } else if (y[x] >= m.upper() - slack) {
+                    mode = Member.Mode.AT_UPPER_STOP;
+                }
+            }
+            modes[k] = mode;
+        }
     }
 
     /** @return the values of all signals at (t, y), SI, in the model's signal order */

@@ -1,0 +1,99 @@
+package org.branchsim.core.model;
+
+/**
+ * The work buffers of one run's Jacobian evaluations ({@link CircuitModel#jacobian}), allocated once per run so
+ * that a Jacobian allocates nothing: the evaluation that collects the elements' partials, a second one that
+ * evaluates a single element for the finite-difference fallback, and the per-node partial sums (inflow in
+ * m^3/s and extra volume in m^3, per SI unit of each state). Like {@link Evaluation}, it reads and writes the
+ * member modes of its run only.
+ *
+ * <p>The fallback, for an element that does not supply partials ({@link Element#suppliesPartials}): each column
+ * j of the element's block (its own states and its ports' pressures) is perturbed by
+ * h_j = r max(|y_j|, s_j), r = eps^(1/3) (about 6e-6; s_j the state's typical magnitude), only that element is
+ * evaluated at y + h_j e_j and y - h_j e_j, and the central quotient (c(y + h_j) - c(y - h_j)) / (2 h_j) of each
+ * of its contributions c (inflow and extra volume per node, derivatives of its own states) is its partial
+ * (Dennis and Schnabel, Numerical Methods for Unconstrained Optimization and Nonlinear Equations, 1983, ch. 5:
+ * truncation error O(h^2), round-off O(eps / h), balanced by h of order eps^(1/3)).
+ */
+public final class JacobianWorkspace {
+
+    /** r = eps^(1/3), the central-difference step relative to max(|y_j|, s_j). */
+    public static final double RELATIVE_STEP = Math.cbrt(Math.ulp(1.0));
+
+    final Evaluation collecting;
+    private final Evaluation single;
+    final double[] rates;
+    private final double[] singleRates;
+    private final double[] perturbed;
+    final double[][] inflowPartials;
+    final double[][] volumePartials;
+    private final double[] plusInflow;
+    private final double[] plusVolume;
+    private final double[] plusRates;
+    private final double[] typical;
+
+    JacobianWorkspace(Node[] nodes, Member.Mode[] modes, double[] impulses, double[] typical) {
+        int n = typical.length;
+        collecting = new Evaluation(nodes, modes, impulses);
+        single = new Evaluation(nodes, modes, impulses);
+        rates = new double[n];
+        singleRates = new double[n];
+        perturbed = new double[n];
+        inflowPartials = new double[nodes.length][n];
+        volumePartials = new double[nodes.length][n];
+        plusInflow = new double[nodes.length];
+        plusVolume = new double[nodes.length];
+        plusRates = new double[n];
+        this.typical = typical.clone();
+    }
+
+    /** @return the step h_j of column j at state y */
+    double step(double[] y, int j) {
+        double h = RELATIVE_STEP * Math.max(Math.abs(y[j]), typical[j]);
+        return h == 0.0 || !Double.isFinite(h) ? RELATIVE_STEP : h;
+    }
+
+    /**
+     * Central differences of one element's contributions over its block, added to the per-node partial sums and
+     * written into its own rows of {@code jac}.
+     *
+     * @param element the element
+     * @param columns its own states and its ports' pressure states (positions in the state vector)
+     * @param rows its own states
+     * @param t time, s
+     * @param y state, SI (not changed)
+     * @param jac output rows, df_i/dy_j
+     */
+    void differences(Element element, int[] columns, int[] rows, double t, double[] y, double[][] jac) {
+        int nodeCount = plusInflow.length;
+        System.arraycopy(y, 0, perturbed, 0, y.length);
+        for (int j : columns) {
+            double h = step(y, j);
+            perturbed[j] = y[j] + h;
+            evaluateSingle(element, t);
+            for (int k = 0; k < nodeCount; k++) {
+                plusInflow[k] = single.inflowOf(k);
+                plusVolume[k] = single.extraVolumeOf(k);
+            }
+            for (int r : rows) {
+                plusRates[r] = singleRates[r];
+            }
+            perturbed[j] = y[j] - h;
+            evaluateSingle(element, t);
+            perturbed[j] = y[j];
+            double twoH = 2.0 * h;
+            for (int k = 0; k < nodeCount; k++) {
+                inflowPartials[k][j] += (plusInflow[k] - single.inflowOf(k)) / twoH;
+                volumePartials[k][j] += (plusVolume[k] - single.extraVolumeOf(k)) / twoH;
+            }
+            for (int r : rows) {
+                jac[r][j] = (plusRates[r] - singleRates[r]) / twoH;
+            }
+        }
+    }
+
+    private void evaluateSingle(Element element, double t) {
+        single.reset(t, perturbed, singleRates, null, null);
+        element.evaluate(single);
+    }
+}
