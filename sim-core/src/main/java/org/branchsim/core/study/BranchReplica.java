@@ -13,7 +13,6 @@ import java.util.HashSet;
 import java.util.Iterator;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
 import org.branchsim.core.scenario.DocumentParser;
 import org.branchsim.core.scenario.Located;
@@ -147,10 +146,11 @@ public final class BranchReplica {
                 ObjectNode c = e.deepCopy();
                 c.put("id", e.path("id").asText() + suffix);
                 ObjectNode ports = (ObjectNode) c.get("ports");
-                for (Iterator<Map.Entry<String, JsonNode>> it = e.path("ports").fields(); it.hasNext(); ) {
-                    Map.Entry<String, JsonNode> port = it.next();
-                    if (branch.nodes().contains(port.getValue().asText())) {
-                        ports.put(port.getKey(), port.getValue().asText() + suffix);
+                for (Iterator<String> it = e.path("ports").fieldNames(); it.hasNext(); ) {
+                    String port = it.next();
+                    String node = e.path("ports").path(port).asText();
+                    if (branch.nodes().contains(node)) {
+                        ports.put(port, node + suffix);
                     }
                 }
                 elements.add(c);
