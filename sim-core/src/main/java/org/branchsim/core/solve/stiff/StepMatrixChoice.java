@@ -4,10 +4,10 @@ import java.util.function.Supplier;
 
 /**
  * Chooses the solver of the iteration matrix d * I - J by the number of states: dense LU below
- * {@link #SPARSE_FROM_STATES}, sparse LU ({@link SparseLu}) from there on. The size was measured with
- * {@code branchsim timing --scaling} on the replicated clamp branch (docs/performance.md, "Size scaling"):
- * dense and sparse cost the same CPU per step near it. A measurement may force either kind for the work it runs
- * on the current thread.
+ * {@link #SPARSE_FROM_STATES}, sparse LU ({@link SparseLu}) from there on. The size was measured by timing one
+ * factorisation and four solves of the iteration matrices of the demos and of the replicated clamp branch of
+ * {@code branchsim timing --scaling} (docs/performance.md, "Size scaling"): dense LU was cheaper at 7 to 13 states,
+ * sparse LU from 17 states on. A measurement may force either kind for the work it runs on the current thread.
  */
 public final class StepMatrixChoice {
 
