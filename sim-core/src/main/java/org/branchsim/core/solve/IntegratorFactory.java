@@ -5,6 +5,7 @@ import org.branchsim.core.settings.Method;
 import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.solve.stiff.RosenbrockIntegrator;
 import org.branchsim.core.solve.stiff.SparsityPattern;
+import org.branchsim.core.solve.stiff.StepMatrixChoice;
 import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 
@@ -20,10 +21,12 @@ final class IntegratorFactory {
     static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol, CircuitModel circuit) {
         switch (s.method()) {
             case IMPLICIT:
+                SparsityPattern pattern = SparsityPattern.ofBlocks(circuit.dimension(), circuit.couplings());
                 RosenbrockIntegrator r = new RosenbrockIntegrator(s.minStep(), s.maxStep(), absTol, relTol,
-                        SparsityPattern.ofBlocks(circuit.dimension(), circuit.couplings()), JACOBIAN_MAX_AGE);
+                        pattern, JACOBIAN_MAX_AGE);
                 r.setTimeDependence(circuit::timeDependentAt);
                 r.setJacobianSource(new ElementJacobian(circuit));
+                r.setLinearSolver(StepMatrixChoice.solverFor(pattern));
                 return r;
             case REFERENCE:
                 return new DormandPrince853Integrator(s.minStep(), s.maxStep(), absTol, relTol);
