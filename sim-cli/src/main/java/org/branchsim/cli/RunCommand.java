@@ -50,6 +50,7 @@ public final class RunCommand implements Callable<Integer> {
             folder.writeText("metrics.json", MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
             FigureSet.write(s, result.trace(), valves, folder);
             FigureSet.writeOscillations(s, result.trace(), oscillations, folder);
+            ReportPage.run(s, result, valves, oscillations, folder);
             folder.writeText("summary.txt", summary);
             folder.commit();
             PrintWriter w = spec.commandLine().getOut();

@@ -101,7 +101,10 @@ public final class SweepCommand implements Callable<Integer> {
                     new VariantProgress(err, toRun.size())::done, o -> StudyTable.Row.of(o, base.units(), overlay));
             err.println();
             StudyOutput.finish(study, part, rows, folder, spec.commandLine().getOut(),
-                    (r, out, pw) -> SweepReport.write(study, r, out, pw));
+                    (r, out, pw) -> {
+                        SweepReport.write(study, r, out, pw);
+                        ReportPage.study(base, "sweep", "summary.csv", out);
+                    });
         }
         return BranchsimMain.OK;
     }

@@ -79,7 +79,10 @@ public final class ToleranceCommand implements Callable<Integer> {
                     new VariantProgress(err, toRun.size())::done, o -> StudyTable.Row.of(o, base.units(), List.of()));
             err.println();
             StudyOutput.finish(study, part, rows, folder, spec.commandLine().getOut(),
-                    (r, out, pw) -> ToleranceReport.write(study, r, out, pw));
+                    (r, out, pw) -> {
+                        ToleranceReport.write(study, r, out, pw);
+                        ReportPage.study(base, "tolerance study", "statistics.csv", out);
+                    });
         }
         return BranchsimMain.OK;
     }
