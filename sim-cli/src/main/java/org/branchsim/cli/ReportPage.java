@@ -7,6 +7,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.analysis.SignalStatistics;
@@ -30,6 +32,12 @@ final class ReportPage {
 
     /** File name of the page. */
     static final String FILE = "report.html";
+    /** File name of the circuit diagram as SVG. */
+    static final String CIRCUIT_SVG = "circuit.svg";
+    /** File name of the circuit diagram as PNG. */
+    static final String CIRCUIT_PNG = "circuit.png";
+    /** Most rows of a study's table shown on the page (the CSV beside it has them all). */
+    static final int MAX_ROWS = 200;
 
     private ReportPage() {
     }
@@ -37,8 +45,10 @@ final class ReportPage {
     /** The page of a run: metrics of each reducing valve and node, energy, findings, figures, solver statistics. */
     static void run(Scenario s, SimulationResult r, List<ReducingValveMetrics> valves,
                     List<OscillationFinding> oscillations, OutputFolder folder) {
-        CircuitDiagram diagram = diagram(s, folder);
-        HtmlReport page = opening("branchsim run: " + s.name(), s, diagram);
+        CircuitDiagram diagram = circuit(s, folder);
+        HtmlReport page = new HtmlReport("branchsim run: " + s.name());
+        page.paragraph("Scenario file: " + s.file());
+        describe(page, s.description(), diagram.inlineSvg());
         Unit pu = s.units().displayUnit(Dimension.PRESSURE);
         Unit qu = s.units().displayUnit(Dimension.VOLUME_FLOW);
         Unit wu = s.units().displayUnit(Dimension.POWER);
@@ -102,16 +112,32 @@ final class ReportPage {
         });
     }
 
-    /** The page of a sweep or tolerance study: the study's table (a CSV it wrote) and its figures. */
-    static void study(Scenario base, String what, String tableFile, OutputFolder folder) {
-        CircuitDiagram diagram = diagram(base, folder);
-        HtmlReport page = opening("branchsim " + what + ": " + base.name(), base, diagram);
+    /**
+     * The page of a sweep or tolerance study, from what an unsharded study and a merge of its shards both have (so
+     * that their folders stay equal byte for byte): the study's definition, its table (a CSV it wrote), its figures,
+     * and the circuit diagram with the scenario's description as circuit.svg holds them.
+     */
+    static void study(StudyDefinition study, String tableFile, OutputFolder folder) {
+        HtmlReport page = new HtmlReport("branchsim " + study.study() + ": " + study.scenario());
+        page.paragraph("Scenario " + study.scenario() + " (file SHA-256 " + study.scenarioSha256() + "); "
+                + study.variants() + " variants; parameters: " + String.join(", ", study.parameters()) + ".");
         write(page, folder, (pg, report) -> {
+            Path svgFile = report.resolveSibling(CIRCUIT_SVG);
+            if (Files.isRegularFile(svgFile)) {
+                String svg = Files.readString(svgFile, StandardCharsets.UTF_8);
+                Matcher m = DESC.matcher(svg);
+                describe(pg, m.find() ? unescape(m.group(1)) : "", svg);
+            }
             List<List<String>> rows = StudyCsv.parse(Files.readString(report.resolveSibling(tableFile),
                     StandardCharsets.UTF_8));
             pg.heading("Results (" + tableFile + ", units in the column headings)");
             if (!rows.isEmpty()) {
-                pg.table("", rows.get(0), rows.subList(1, rows.size()));
+                int shown = Math.min(rows.size() - 1, MAX_ROWS);
+                pg.table("", rows.get(0), rows.subList(1, 1 + shown));
+                if (shown < rows.size() - 1) {
+                    pg.paragraph("The first " + shown + " of " + (rows.size() - 1) + " rows; all are in " + tableFile
+                            + ".");
+                }
             }
             figures(pg, folder.written(), report);
         });
@@ -119,32 +145,56 @@ final class ReportPage {
 
     /** The page of a diagnosis: its text, its before/after figures. */
     static void diagnose(Scenario s, String diagnosisText, OutputFolder folder) {
-        CircuitDiagram diagram = diagram(s, folder);
-        HtmlReport page = opening("branchsim diagnose: " + s.name(), s, diagram);
+        CircuitDiagram diagram = circuit(s, folder);
+        HtmlReport page = new HtmlReport("branchsim diagnose: " + s.name());
+        page.paragraph("Scenario file: " + s.file());
+        describe(page, s.description(), diagram.inlineSvg());
         page.heading("Diagnosis");
         page.preformatted(diagnosisText);
         write(page, folder, (pg, report) -> figures(pg, folder.written(), report));
     }
 
-    private static CircuitDiagram diagram(Scenario s, OutputFolder folder) {
-        CircuitDiagram d = CircuitDiagram.of(s.circuit(), s.name() + ": circuit");
-        folder.write("circuit.svg", d::writeSvg);
-        folder.write("circuit.png", d::writePng);
+    /**
+     * Writes the scenario's circuit diagram, with its description in the SVG's {@code <desc>}, as circuit.svg and
+     * circuit.png (a study writes them into each shard's folder too, for the merge to carry over).
+     *
+     * @return the diagram
+     */
+    static CircuitDiagram circuit(Scenario s, OutputFolder folder) {
+        CircuitDiagram d = CircuitDiagram.of(s.circuit(), s.name() + ": circuit").describedAs(s.description());
+        folder.write(CIRCUIT_SVG, d::writeSvg);
+        folder.write(CIRCUIT_PNG, d::writePng);
         return d;
     }
 
-    private static HtmlReport opening(String title, Scenario s, CircuitDiagram diagram) {
-        HtmlReport page = new HtmlReport(title);
-        page.paragraph("Scenario file: " + s.file());
-        if (s.description() != null && !s.description().isBlank()) {
+    /** Copies the circuit diagram of a study from one of its shard folders, when it has one. */
+    static void copyCircuit(Path shardFolder, OutputFolder folder) {
+        for (String name : List.of(CIRCUIT_SVG, CIRCUIT_PNG)) {
+            Path from = shardFolder.resolve(name);
+            if (Files.isRegularFile(from)) {
+                folder.write(name, p -> Files.copy(from, p));
+            }
+        }
+    }
+
+    /** Adds the scenario's description (when it has one) and its circuit diagram. */
+    private static void describe(HtmlReport page, String description, String svg) {
+        if (description != null && !description.isBlank()) {
             page.heading("Scenario");
-            page.paragraph(s.description());
+            page.paragraph(description);
         }
         page.heading("Circuit");
-        page.svg(diagram.inlineSvg(), "Circuit diagram drawn from the scenario's elements and nodes with ISO 1219-1 "
-                + "symbols (pilot and drain lines dashed; node names in grey italics on their lines; a tank symbol "
-                + "at every port on a tank). Also circuit.svg and circuit.png.");
-        return page;
+        page.svg(svg, "Circuit diagram drawn from the scenario's elements and nodes with ISO 1219-1 symbols (pilot "
+                + "and drain lines dashed; node names in grey italics on their lines; a tank symbol at every port on a "
+                + "tank). Also circuit.svg and circuit.png.");
+    }
+
+    private static final Pattern DESC = Pattern.compile("<desc>(.*?)</desc>", Pattern.DOTALL);
+
+    /** @return XML text with the five predefined entities (XML 1.0, section 4.6) replaced by their characters */
+    static String unescape(String xml) {
+        return xml.replace("&lt;", "<").replace("&gt;", ">").replace("&quot;", "\"").replace("&apos;", "'")
+                .replace("&amp;", "&");
     }
 
     /** What a page adds once the folder holds everything else (the figures it embeds, the tables it reads). */

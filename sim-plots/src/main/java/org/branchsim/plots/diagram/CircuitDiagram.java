@@ -31,20 +31,31 @@ public final class CircuitDiagram {
 
     private final CircuitLayout layout;
     private final String title;
+    private final String description;
 
-    private CircuitDiagram(CircuitLayout layout, String title) {
+    private CircuitDiagram(CircuitLayout layout, String title, String description) {
         this.layout = layout;
         this.title = title;
+        this.description = description == null ? "" : description;
     }
 
     /** @return the diagram of a netlist under a title */
     public static CircuitDiagram of(Netlist netlist, String title) {
-        return new CircuitDiagram(CircuitLayout.of(netlist), title);
+        return new CircuitDiagram(CircuitLayout.of(netlist), title, "");
     }
 
     /** @return the diagram of a circuit model under a title */
     public static CircuitDiagram of(CircuitModel model, String title) {
         return of(Netlist.of(model), title);
+    }
+
+    /**
+     * @param description what the circuit is for (the scenario's description), kept in the SVG's {@code <desc>}
+     *        element (SVG 1.1, section 5.4) so that the file carries it; empty for none
+     * @return this diagram with a description
+     */
+    public CircuitDiagram describedAs(String description) {
+        return new CircuitDiagram(layout, title, description);
     }
 
     /** @return the layout the diagram draws */
@@ -125,14 +136,14 @@ public final class CircuitDiagram {
     public String svg() {
         SvgCanvas c = new SvgCanvas(layout.width(), layout.height());
         draw(c);
-        return "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + c.svg(title);
+        return "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + c.svg(title, description);
     }
 
     /** @return the diagram as an {@code <svg>} element to put inside an HTML page */
     public String inlineSvg() {
         SvgCanvas c = new SvgCanvas(layout.width(), layout.height());
         draw(c);
-        return c.svg(title);
+        return c.svg(title, description);
     }
 
     /** Writes the SVG document (UTF-8). @throws IOException when the file cannot be written */

@@ -50,12 +50,17 @@ public final class SvgCanvas implements Canvas {
                         : " fill=\"black\"")).append(escape(text)).append("</text>\n");
     }
 
-    /** @return the whole {@code <svg>} element, with an XML-escaped title for screen readers */
-    public String svg(String title) {
+    /**
+     * @param title the drawing's title (XML-escaped into {@code <title>}, read by screen readers)
+     * @param description a longer description for {@code <desc>}, empty for none
+     * @return the whole {@code <svg>} element
+     */
+    public String svg(String title, String description) {
         return String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"%.0f\" height=\"%.0f\" "
                 + "viewBox=\"0 0 %.0f %.0f\" role=\"img\" font-family=\"DejaVu Sans, Arial, sans-serif\">%n", width,
                 height, width, height)
                 + "<title>" + escape(title) + "</title>\n"
+                + (description.isEmpty() ? "" : "<desc>" + escape(description) + "</desc>\n")
                 + "<rect width=\"100%\" height=\"100%\" fill=\"white\"/>\n"
                 + "<g stroke=\"black\" stroke-width=\"1.4\" stroke-linejoin=\"round\">\n"
                 + body.toString().replace("<text ", "<text stroke=\"none\" ")

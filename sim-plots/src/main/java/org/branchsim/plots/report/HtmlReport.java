@@ -19,7 +19,8 @@ public final class HtmlReport {
             "h1{font-size:1.6em;margin-bottom:.2em}h2{font-size:1.25em;border-bottom:1px solid #999;margin-top:1.6em}",
             "table{border-collapse:collapse;margin:.6em 0;font-size:.92em}",
             "th,td{border:1px solid #bbb;padding:.25em .5em;text-align:left;vertical-align:top}",
-            "td.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}th{background:#eee}",
+            "td.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}",
+            "th{background:#eee;overflow-wrap:anywhere}table.wide{font-size:.7em}",
             "figure{margin:1em 0;page-break-inside:avoid;break-inside:avoid}",
             "figure img,figure svg{max-width:100%;height:auto;border:1px solid #ddd}",
             "figcaption{font-size:.9em;color:#333}",
@@ -29,6 +30,9 @@ public final class HtmlReport {
             "@media print{body{max-width:none;margin:0;font-size:10pt}@page{size:A4;margin:15mm}",
             "h2{page-break-after:avoid;break-after:avoid}table,pre{page-break-inside:avoid;break-inside:avoid}",
             "figure img,figure svg{border:none}a{color:inherit;text-decoration:none}}");
+
+    /** Most columns set in the normal type. */
+    public static final int WIDE = 8;
 
     private final String title;
     private final List<String> parts = new ArrayList<>();
@@ -57,7 +61,8 @@ public final class HtmlReport {
     }
 
     /**
-     * Adds a table; cells that read as numbers are right-aligned.
+     * Adds a table; cells that read as numbers are right-aligned; a table of more than {@link #WIDE} columns is set
+     * in a smaller type so that it fits the page.
      *
      * @param caption what the table shows
      * @param header column headings (with units)
@@ -65,7 +70,7 @@ public final class HtmlReport {
      * @return this
      */
     public HtmlReport table(String caption, List<String> header, List<List<String>> rows) {
-        StringBuilder sb = new StringBuilder("<table>");
+        StringBuilder sb = new StringBuilder(header.size() > WIDE ? "<table class=\"wide\">" : "<table>");
         if (caption != null && !caption.isEmpty()) {
             sb.append("<caption>").append(escape(caption)).append("</caption>");
         }
