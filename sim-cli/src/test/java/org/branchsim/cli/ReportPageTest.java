@@ -76,7 +76,7 @@ class ReportPageTest {
         String html = Files.readString(dir.resolve("report.html"), StandardCharsets.UTF_8);
         String header = Files.readAllLines(dir.resolve("summary.csv")).get(0);
         for (String column : StudyCsv.parse(header).get(0)) {
-            assertTrue(html.contains("<th>" + column.replace("&", "&amp;") + "</th>"), column);
+            assertTrue(html.contains("<th>" + column.replace("&", "&amp;").replace(".", ".<wbr>") + "</th>"), column);
         }
         assertEquals(pngs(dir).size() - 1, dataUris(html));
         assertTrue(html.contains("branchsim sweep: feed-stall"));

@@ -20,7 +20,7 @@ public final class HtmlReport {
             "table{border-collapse:collapse;margin:.6em 0;font-size:.92em}",
             "th,td{border:1px solid #bbb;padding:.25em .5em;text-align:left;vertical-align:top}",
             "td.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}",
-            "th{background:#eee;overflow-wrap:anywhere}table.wide{font-size:.7em}",
+            "th{background:#eee}table.wide{font-size:.7em}div.wide{overflow-x:auto}",
             "figure{margin:1em 0;page-break-inside:avoid;break-inside:avoid}",
             "figure img,figure svg{max-width:100%;height:auto;border:1px solid #ddd}",
             "figcaption{font-size:.9em;color:#333}",
@@ -29,6 +29,7 @@ public final class HtmlReport {
             ".caution h2{border:none;color:#a00;margin-top:.3em}",
             "@media print{body{max-width:none;margin:0;font-size:10pt}@page{size:A4;margin:15mm}",
             "h2{page-break-after:avoid;break-after:avoid}table,pre{page-break-inside:avoid;break-inside:avoid}",
+            "table.wide{font-size:6pt}div.wide{overflow:visible}",
             "figure img,figure svg{border:none}a{color:inherit;text-decoration:none}}");
 
     /** Most columns set in the normal type. */
@@ -62,7 +63,7 @@ public final class HtmlReport {
 
     /**
      * Adds a table; cells that read as numbers are right-aligned; a table of more than {@link #WIDE} columns is set
-     * in a smaller type so that it fits the page.
+     * in a smaller type (and scrolls sideways on a narrow screen); headings may break after a dot (long parameter paths).
      *
      * @param caption what the table shows
      * @param header column headings (with units)
@@ -70,13 +71,15 @@ public final class HtmlReport {
      * @return this
      */
     public HtmlReport table(String caption, List<String> header, List<List<String>> rows) {
-        StringBuilder sb = new StringBuilder(header.size() > WIDE ? "<table class=\"wide\">" : "<table>");
+        boolean wide = header.size() > WIDE;
+        StringBuilder sb = new StringBuilder(wide ? "<div class=\"wide\"><table class=\"wide\">" : "<table>");
         if (caption != null && !caption.isEmpty()) {
             sb.append("<caption>").append(escape(caption)).append("</caption>");
         }
         sb.append("<thead><tr>");
         for (String h : header) {
-            sb.append("<th>").append(escape(h)).append("</th>");
+            // a long parameter path may break after its dots (<wbr>), never inside a word
+            sb.append("<th>").append(escape(h).replace(".", ".<wbr>")).append("</th>");
         }
         sb.append("</tr></thead><tbody>");
         for (List<String> row : rows) {
@@ -90,7 +93,7 @@ public final class HtmlReport {
             }
             sb.append("</tr>");
         }
-        parts.add(sb.append("</tbody></table>").toString());
+        parts.add(sb.append(wide ? "</tbody></table></div>" : "</tbody></table>").toString());
         return this;
     }
 

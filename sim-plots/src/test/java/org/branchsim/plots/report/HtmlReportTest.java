@@ -49,6 +49,9 @@ class HtmlReportTest {
         assertTrue(html.contains("<td>setting</td><td class=\"n\">45.01</td>"), html);
         assertTrue(html.contains("<td class=\"n\">-1.5e-3</td>"), html);
         assertEquals(1, html.split("<caption>", -1).length - 1);
+        assertTrue(html.contains("<th>v [bar]</th>"), html);
+        assertTrue(new HtmlReport("t").table("", List.of("a.b.c [mm]"), List.of()).html()
+                .contains("<th>a.<wbr>b.<wbr>c [mm]</th>"), "long paths may break after their dots");
         assertThrows(IllegalArgumentException.class, () -> new HtmlReport("t").table("", List.of("a", "b"),
                 List.of(List.of("only one"))));
     }
