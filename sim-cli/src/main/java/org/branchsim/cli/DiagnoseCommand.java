@@ -83,6 +83,7 @@ public final class DiagnoseCommand implements Callable<Integer> {
                 k++;
                 figures(folder, s, r, d, k);
             }
+            ReportPage.diagnose(s, text, folder);
             folder.commit();
             PrintWriter w = spec.commandLine().getOut();
             w.print(text);

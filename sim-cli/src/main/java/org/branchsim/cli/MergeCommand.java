@@ -54,6 +54,7 @@ public final class MergeCommand implements Callable<Integer> {
         Path[] inputs = shards.toArray(Path[]::new);
         try (OutputFolder folder = new OutputFolder(out != null ? out : study.defaultOut(), inputs)) {
             PrintWriter w = spec.commandLine().getOut();
+            ReportPage.copyCircuit(shards.get(0), folder);
             w.printf("%s %s: merged %d shards, %d variants%n", study.scenario(), study.study(), parts.size(), rows.size());
             if (study instanceof SweepDefinition sweep) {
                 SweepReport.write(sweep, rows, folder, w);

@@ -56,6 +56,7 @@ public final class RunCommand implements Callable<Integer> {
                         MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
                 FigureSet.write(s, trace, valves, folder);
                 FigureSet.writeOscillations(s, trace, oscillations, folder);
+                ReportPage.run(s, result, valves, oscillations, folder);
             }
             folder.writeText("summary.txt", summary);
             folder.commit();

@@ -100,6 +100,7 @@ public final class SweepCommand implements Callable<Integer> {
             List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), toRun, n,
                     new VariantProgress(err, toRun.size())::done, o -> StudyTable.Row.of(o, base.units(), overlay));
             err.println();
+            ReportPage.circuit(base, folder);
             StudyOutput.finish(study, part, rows, folder, spec.commandLine().getOut(),
                     (r, out, pw) -> SweepReport.write(study, r, out, pw));
         }

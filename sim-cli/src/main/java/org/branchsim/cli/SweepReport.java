@@ -4,13 +4,21 @@ import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Arrays;
 import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.branchsim.core.study.Variant;
+import org.branchsim.core.units.Unit;
+import org.branchsim.core.units.Units;
+import org.branchsim.plots.HeatMap;
+import org.branchsim.plots.SweepOverlay;
 import org.branchsim.plots.TraceCharts;
 
 /**
  * The results of a whole sweep, from its rows in variant order: the ranked table on the console,
- * summary.csv and one overlay figure per signal. Both an unsharded sweep and a merge of its shards write
+ * summary.csv, one overlay figure per signal (coloured by the first varied value past six variants) and, for a
+ * two-parameter grid, a heat map of the ranking metric. Both an unsharded sweep and a merge of its shards write
  * through here, so that their folders are the same.
  */
 final class SweepReport {
@@ -35,23 +43,93 @@ final class SweepReport {
         folder.writeText("summary.csv", StudyTable.csv(study.parameters(), rows, cols,
                 StudyTable.ranks(rows, study.rankBy(), study.descending())));
         writeOverlays(study, rows, folder);
+        ReportPage.study(study, "summary.csv", folder);
     }
 
+    /**
+     * Writes one overlay per signal: past {@link SweepOverlay#MAX_LEGEND} variants, coloured by the first varied
+     * parameter's value with a colour bar; and, for a two-parameter grid, a heat map of the ranking metric.
+     */
     private static void writeOverlays(SweepDefinition study, List<StudyTable.Row> rows, OutputFolder folder) {
         List<StudyTable.Row> ok = rows.stream().filter(StudyTable.Row::ok).toList();
         if (ok.isEmpty()) {
             return;
         }
+        SweepDefinition.Axis first = study.axes().get(0);
+        Unit unit = unitOf(first.values());
+        String varied = shortPath(first.path()) + (unit == null ? "" : " [" + unit.symbol() + "]");
         for (var column : study.overlay()) {
             String signal = column.name();
-            List<TraceCharts.Labelled> runs = new ArrayList<>();
+            List<SweepOverlay.Variant> runs = new ArrayList<>();
             for (StudyTable.Row r : ok) {
-                runs.add(new TraceCharts.Labelled(label(r.variant()), r.overlay()));
+                runs.add(new SweepOverlay.Variant(new TraceCharts.Labelled(label(r.variant()), r.overlay()),
+                        number(r.variant().values().get(first.path()), unit)));
             }
             String file = "overlay-" + FigureSet.slug(signal) + ".png";
-            folder.write(file, p -> TraceCharts.compare(runs, signal, study.scenario() + " sweep: " + signal,
+            folder.write(file, p -> SweepOverlay.save(runs, signal, varied, study.scenario() + " sweep: " + signal,
                     study.units(), p));
         }
+        if (study.axes().size() == 2 && study.rankBy() != null) {
+            SweepDefinition.Axis second = study.axes().get(1);
+            double[][] metric = grid(rows, first, second, study.rankBy());
+            Unit u2 = unitOf(second.values());
+            folder.write("heatmap-" + FigureSet.slug(study.rankBy()) + ".png", p -> HeatMap.save(first.values(),
+                    second.values(), metric, varied, shortPath(second.path()) + (u2 == null ? "" : " [" + u2.symbol()
+                            + "]"), study.rankBy(), study.scenario() + " sweep: " + study.rankBy() + " over the grid",
+                    p));
+        }
+    }
+
+    /** @return the metric at each grid point [first axis index][second axis index], NaN where the run failed */
+    static double[][] grid(List<StudyTable.Row> rows, SweepDefinition.Axis first, SweepDefinition.Axis second,
+                           String metric) {
+        double[][] z = new double[first.values().size()][second.values().size()];
+        for (double[] col : z) {
+            Arrays.fill(col, Double.NaN);
+        }
+        for (StudyTable.Row r : rows) {
+            int i = first.values().indexOf(String.valueOf(r.variant().values().get(first.path())));
+            int j = second.values().indexOf(String.valueOf(r.variant().values().get(second.path())));
+            Double v = r.ok() ? r.metrics().get(metric) : null;
+            if (i >= 0 && j >= 0 && v != null) {
+                z[i][j] = v;
+            }
+        }
+        return z;
+    }
+
+    private static final Pattern NUMBER_AND_UNIT =
+            Pattern.compile("^\\s*([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(.*?)\\s*$");
+
+    /** @return the unit the first value is written in, null when it is a plain number or not a number */
+    static Unit unitOf(List<String> values) {
+        Matcher m = NUMBER_AND_UNIT.matcher(values.isEmpty() ? "" : values.get(0));
+        return m.matches() && !m.group(2).isEmpty() ? Units.find(m.group(2)) : null;
+    }
+
+    /** @return a varied value as a number in the given unit (plain numbers as they are), NaN when it is not one */
+    static double number(Object value, Unit unit) {
+        if (value instanceof Number n) {
+            return n.doubleValue();
+        }
+        Matcher m = NUMBER_AND_UNIT.matcher(String.valueOf(value));
+        if (!m.matches()) {
+            return Double.NaN;
+        }
+        double x = Double.parseDouble(m.group(1));
+        if (m.group(2).isEmpty()) {
+            return unit == null ? x : Double.NaN;
+        }
+        Unit u = Units.find(m.group(2));
+        if (u == null || unit == null || u.dimension() != unit.dimension()) {
+            return Double.NaN;
+        }
+        return unit.fromSi(u.toSi(x));
+    }
+
+    /** @return a parameter path shortened to its last two parts */
+    static String shortPath(String path) {
+        return path.substring(path.lastIndexOf('.', path.lastIndexOf('.') - 1) + 1);
     }
 
     /** @return a variant's values as "name=value, ..." with each path shortened to its last two parts */

@@ -78,6 +78,7 @@ public final class ToleranceCommand implements Callable<Integer> {
             List<StudyTable.Row> rows = StudyRunner.run(base.file(), base.document(), toRun, n,
                     new VariantProgress(err, toRun.size())::done, o -> StudyTable.Row.of(o, base.units(), List.of()));
             err.println();
+            ReportPage.circuit(base, folder);
             StudyOutput.finish(study, part, rows, folder, spec.commandLine().getOut(),
                     (r, out, pw) -> ToleranceReport.write(study, r, out, pw));
         }

@@ -52,6 +52,7 @@ final class ToleranceReport {
                     Math.max(5, (int) Math.ceil(Math.sqrt(values.length))),
                     study.scenario() + ": " + metric + " over " + values.length + " runs", metric, p));
         }
+        ReportPage.study(study, "statistics.csv", folder);
         w.printf("%s: %d runs, seed %d, %d failed; toleranced values:%n", study.scenario(), study.runs(), study.seed(),
                 rows.stream().filter(r -> !r.ok()).count());
         for (ToleranceStudy.Parameter p : study.tolerances()) {
