@@ -4,6 +4,7 @@ import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.settings.Method;
 import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.solve.stiff.RosenbrockIntegrator;
+import org.branchsim.core.solve.stiff.RosenbrockScheme;
 import org.branchsim.core.solve.stiff.SparsityPattern;
 import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
@@ -17,12 +18,21 @@ final class IntegratorFactory {
     /** Steps a Jacobian may serve before it is estimated again. */
     static final int JACOBIAN_MAX_AGE = 1;
 
+    /**
+     * The implicit methods with their own dense output also control its error inside steps (docs/theory.md
+     * section 10; docs/performance.md, "Method choice").
+     */
+    static final boolean INTERIOR_CONTROL = true;
+
     static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol, CircuitModel circuit) {
         switch (s.method()) {
             case IMPLICIT:
-                RosenbrockIntegrator r = new RosenbrockIntegrator(s.minStep(), s.maxStep(), absTol, relTol,
-                        SparsityPattern.ofBlocks(circuit.dimension(), circuit.couplings()), JACOBIAN_MAX_AGE);
+            case IMPLICIT_ORDER3:
+                RosenbrockIntegrator r = new RosenbrockIntegrator(scheme(s.method()), s.minStep(), s.maxStep(),
+                        absTol, relTol, SparsityPattern.ofBlocks(circuit.dimension(), circuit.couplings()),
+                        JACOBIAN_MAX_AGE);
                 r.setTimeDependence(circuit::timeDependentAt);
+                r.setInteriorErrorControl(INTERIOR_CONTROL);
                 return r;
             case REFERENCE:
                 return new DormandPrince853Integrator(s.minStep(), s.maxStep(), absTol, relTol);
@@ -32,10 +42,16 @@ final class IntegratorFactory {
         }
     }
 
+    /** @return the Rosenbrock scheme an implicit method runs */
+    static RosenbrockScheme scheme(Method m) {
+        return m == Method.IMPLICIT_ORDER3 ? RosenbrockScheme.RODAS3 : RosenbrockScheme.RODAS4;
+    }
+
     static String describe(Method m) {
         switch (m) {
             case IMPLICIT:
-                return "implicit " + RosenbrockIntegrator.METHOD_NAME;
+            case IMPLICIT_ORDER3:
+                return "implicit " + scheme(m).name();
             case REFERENCE:
                 return "explicit Dormand-Prince 8(5,3)";
             case EXPLICIT:
