@@ -286,7 +286,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
             accepted++;
             jacobianAge++;
             jacobianFresh = false;
-            setStepStart(acceptStep(interpolator(start, end, u, q2, q3, mapper), finalTime));
+            setStepStart(acceptStep(interpolator(start, end, u, mapper), finalTime));
             boolean reset = resetOccurred();
             if (reset) {
                 jacobianAge = Integer.MAX_VALUE;
@@ -335,9 +335,9 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         return mapper.mapStateAndDerivative(time, y, computeDerivatives(time, y));
     }
 
+    /** @return the step's dense output (its own arrays: the stage buffers are reused by the next step) */
     private AbstractODEStateInterpolator interpolator(ODEStateAndDerivative start, ODEStateAndDerivative end,
-                                                      double[][] u, double[] q2, double[] q3,
-                                                      EquationsMapper mapper) {
+                                                      double[][] u, EquationsMapper mapper) {
         if (scheme.dense() == RosenbrockScheme.DenseOutput.STAGES) {
             double[] d2 = new double[q2.length];
             double[] d3 = new double[q3.length];
