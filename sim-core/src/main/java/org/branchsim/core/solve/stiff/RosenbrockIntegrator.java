@@ -339,8 +339,8 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     private AbstractODEStateInterpolator interpolator(ODEStateAndDerivative start, ODEStateAndDerivative end,
                                                       double[][] u, EquationsMapper mapper) {
         if (scheme.dense() == RosenbrockScheme.DenseOutput.STAGES) {
-            double[] d2 = new double[q2.length];
-            double[] d3 = new double[q3.length];
+            double[] d2 = new double[u[0].length];
+            double[] d3 = new double[u[0].length];
             denseCombinations(u, d2, d3);
             return new StageInterpolator(start, end, d2, d3, mapper);
         }
