@@ -123,11 +123,12 @@ public final class TimingCommand implements Callable<Integer> {
         List<Path> files = scenarios.isEmpty() ? defaultDemos() : scenarios;
         List<Method> methodList = new ArrayList<>();
         for (String m : methods) {
-            try {
-                methodList.add(Method.valueOf(m.trim().toUpperCase(Locale.ROOT)));
-            } catch (IllegalArgumentException e) {
-                throw OptionChecks.unreadable("--methods", "implicit, explicit or reference", "\"" + m + "\"");
+            Method method = Method.named(m);
+            if (method == null) {
+                throw OptionChecks.unreadable("--methods", java.util.Arrays.stream(Method.values()).map(Method::word)
+                        .collect(java.util.stream.Collectors.joining(", ")), "\"" + m + "\"");
             }
+            methodList.add(method);
         }
         Double end = endTime == null ? null : parseTime(endTime);
         // every input is read and checked before the first measurement
@@ -246,14 +247,14 @@ public final class TimingCommand implements Callable<Integer> {
                 MetricsReport.putFinite(o, "eventTimeMaxDifference_s", eventDiff);
                 o.put("peakHeap_MB", heap);
                 csv.append(String.format(Locale.ROOT, "%s,%s,%g,%.6f,%.6f,%.6f,%s,%s,%s,%.1f,%d,%d,%d,%d,%d,%d,%s,%s,%.1f%n",
-                        base.name(), m.name().toLowerCase(Locale.ROOT), s.endTime(), median, walls[0],
+                        base.name(), m.word(), s.endTime(), median, walls[0],
                         walls[walls.length - 1], seconds(cpuMedian), seconds(cpus[0]), seconds(cpus[cpus.length - 1]),
                         s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),
                         st.evaluations(), st.jacobians(), st.factorisations(), st.totalEvents(),
                         Double.isNaN(err) ? "" : String.format(Locale.ROOT, "%.3g", err),
                         Double.isNaN(eventDiff) ? "" : String.format(Locale.ROOT, "%.3g", eventDiff), heap));
                 w.printf(Locale.ROOT, "%-18s %-9s %9.3g %9.4f %9.4f %9.4f %9.4f %8.4f %8.4f %8.1f %8d %8d %10d %8d %8d %7.2g %8.1f%n",
-                        base.name(), m.name().toLowerCase(Locale.ROOT), s.endTime(), median, walls[0],
+                        base.name(), m.word(), s.endTime(), median, walls[0],
                         walls[walls.length - 1], cpuMedian, cpus[0], cpus[cpus.length - 1], s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),
                         st.evaluations(), st.jacobians(), st.factorisations(), err, heap);
                 w.flush();

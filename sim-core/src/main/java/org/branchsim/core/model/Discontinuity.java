@@ -4,6 +4,15 @@ package org.branchsim.core.model;
  * A place where the circuit's equations change abruptly: a member reaching a seat or a stop, a contact
  * starting, a corner of a schedule or of a flow-area curve. It is located by the sign change of a
  * continuous switching function {@link #g(StateView)}; the solver turns it into an event.
+ * <p>
+ * <b>Sign-continuity rule.</b> While the discrete modes of the run (members free or held) do not change,
+ * g must be a continuous function of the time and the states, so that the solver may sample it at any
+ * instant inside a step (it is checked at intervals, not only at step ends) and interpolate between samples:
+ * its sign change, and only that, defines the event. g may jump only where the mode it reads changes, i.e.
+ * at an event, and then it must restart on the side that does not immediately trigger again (e.g. a member
+ * held at its seat switches from g = x - x_seat to g = net force - release force, positive only once the
+ * force pulls it off). A discontinuity whose time is known in advance says so by {@link #knownTime()}; the
+ * implicit solver then lands on that time instead of searching for the sign change.
  */
 public interface Discontinuity {
 
@@ -31,6 +40,16 @@ public interface Discontinuity {
      *         an interval (Hipparchus then cannot tell its sign): offset thresholds by a negligible amount.
      */
     double g(StateView state);
+
+    /**
+     * @return the time, s, at which this discontinuity happens when it is known before the run (a corner of a
+     *         scheduled input), else NaN (the default). Such a discontinuity only changes the equations: its
+     *         crossing answers {@link Response#RECOMPUTE} and edits no state, so a solver that lands on the
+     *         time exactly may record it without calling {@link #onCrossing}.
+     */
+    default double knownTime() {
+        return Double.NaN;
+    }
 
     /**
      * Called at the located crossing.

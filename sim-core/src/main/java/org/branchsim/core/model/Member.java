@@ -68,6 +68,17 @@ public interface Member {
         return mode == Mode.AT_LOWER_STOP && f > RELEASE_FORCE || mode == Mode.AT_UPPER_STOP && -f > RELEASE_FORCE;
     }
 
+    /**
+     * The period of the member's free oscillation on its restoring stiffness, 2 pi sqrt(m/k), which sets how
+     * often the solver checks its stop events inside a step.
+     *
+     * @param s the state at which the stiffness k = -dF/dx is taken
+     * @return the natural period, s, or NaN when the member has no restoring stiffness there (the default)
+     */
+    default double naturalPeriod(StateView s) {
+        return Double.NaN;
+    }
+
     /** @return the mode at the start of a run: held at a stop when it starts there and the net force presses it on */
     default Mode initialMode(StateView s) {
         double pos = s.value(positionSlot());

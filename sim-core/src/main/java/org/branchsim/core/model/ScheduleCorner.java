@@ -4,7 +4,8 @@ import java.util.Locale;
 
 /**
  * A corner or step of a scheduled input at a fixed time: g = t - t_corner. The solver stops there and
- * restarts with fresh derivatives, so no step straddles the change.
+ * restarts with fresh derivatives, so no step straddles the change; its time is known, so the implicit solver
+ * lands on it exactly (the explicit ones locate the sign change of g).
  */
 final class ScheduleCorner implements Discontinuity {
     private final String input;
@@ -28,6 +29,11 @@ final class ScheduleCorner implements Discontinuity {
     @Override
     public String owner() {
         return input.substring(0, Math.max(0, input.indexOf('.')));
+    }
+
+    @Override
+    public double knownTime() {
+        return time;
     }
 
     @Override

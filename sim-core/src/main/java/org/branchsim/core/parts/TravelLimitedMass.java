@@ -146,6 +146,52 @@ public final class TravelLimitedMass implements Member {
     }
 
     /**
+     * The natural period 2 pi sqrt(m/k) with the restoring stiffness k = -dF/dx of the net force taken by a
+     * central difference over a thousandth of the travel at {@code s} (spring rate plus any position-dependent
+     * force, e.g. a flow force).
+     *
+     * @return the period, s, or NaN when k is not positive (no spring: nothing pulls the member back)
+     */
+    @Override
+    public double naturalPeriod(StateView s) {
+        double dx = 1e-3 * (upper - lower);
+        double x0 = s.value(x);
+        double[] offset = new double[1];
+        StateView shifted = new StateView() {
+            @Override
+            public double time() {
+                return s.time();
+            }
+
+            @Override
+            public double value(StateSlot slot) {
+                return slot == x ? x0 + offset[0] : s.value(slot);
+            }
+
+            @Override
+            public double pressure(org.branchsim.core.model.Node node) {
+                return s.pressure(node);
+            }
+
+            @Override
+            public Mode mode(ModeSlot slot) {
+                return s.mode(slot);
+            }
+
+            @Override
+            public double input(org.branchsim.core.model.ScheduledInput input) {
+                return s.input(input);
+            }
+        };
+        offset[0] = dx;
+        double up = netForce.at(shifted);
+        offset[0] = -dx;
+        double down = netForce.at(shifted);
+        double k = -(up - down) / (2 * dx);
+        return k > 0 ? 2 * Math.PI * Math.sqrt(mass / k) : Double.NaN;
+    }
+
+    /**
      * Applies the forces: sets dx/dt and dv/dt (zero while held), records signals and books the power of
      * each force. {@code forces.external} is not booked here; its owner books it.
      */

@@ -1,7 +1,6 @@
 package org.branchsim.core.scenario;
 
 import java.util.Arrays;
-import java.util.Locale;
 import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.settings.Method;
 import org.branchsim.core.settings.SolverSettings;
@@ -30,10 +29,11 @@ final class SolverSection {
             FieldSpec.number("maxEvaluations", 1000, 1e10, SolverSettings.DEFAULT_MAX_EVALUATIONS)
                     .meaning("derivative evaluations allowed"),
             FieldSpec.choice("method", Arrays.stream(Method.values())
-                            .map(m -> FieldSpec.word(m.name().toLowerCase(Locale.ROOT))).toArray(FieldSpec.Word[]::new))
-                    .byDefault(SolverSettings.DEFAULT_METHOD.name().toLowerCase(Locale.ROOT))
-                    .meaning("\"implicit\" (Rosenbrock, for stiff circuits: the default), \"explicit\" (Dormand–Prince "
-                            + "5(4)) or \"reference\" (Dormand–Prince 8(5,3), for tight-tolerance checks)"))
+                            .map(m -> FieldSpec.word(m.word())).toArray(FieldSpec.Word[]::new))
+                    .byDefault(SolverSettings.DEFAULT_METHOD.word())
+                    .meaning("\"implicit\" (Rosenbrock RODAS, order 4, for stiff circuits: the default), "
+                            + "\"implicit-order3\" (Rosenbrock RODAS3, the implicit method before RODAS), \"explicit\" "
+                            + "(Dormand–Prince 5(4)) or \"reference\" (Dormand–Prince 8(5,3), for tight-tolerance checks)"))
             .with(SolverSection::intervalWithinEnd);
 
     private SolverSection() {
@@ -63,7 +63,7 @@ final class SolverSection {
         double dt = r.has("outputInterval") ? r.si("outputInterval") : Double.isNaN(end) ? 1e-3 : end / 1000.0;
         double maxStep = r.has("maxStep") ? r.si("maxStep") : Geometry.ok(end, dt) ? Math.max(dt, end / 100.0) : 1e-3;
         String methodName = r.text("method");
-        Method method = methodName == null ? null : Method.valueOf(methodName.toUpperCase(Locale.ROOT));
+        Method method = Method.named(methodName);
         if (!Geometry.ok(end, dt, r.si("relativeTolerance"), maxStep, r.si("minStep"), r.si("eventTolerance"),
                 r.si("maxEvaluations")) || method == null) {
             return null;

@@ -9,33 +9,20 @@ import org.branchsim.core.solve.stiff.JacobianSource;
  * place of finite differences of the whole right-hand side ({@link CircuitModel#jacobian}). Units: row i in
  * state i's SI unit per second, column j per SI unit of state j.
  *
- * <p>The member modes: built on a run's engine it uses that run's modes; built on the model alone (the
- * integrator is created before it sees the run), it keeps its own engine and takes each member's mode from the
- * state and derivative it is handed ({@code RunEngine#inferModes}: held exactly on a stop, at rest, with zero
- * derivatives). One instance serves one run on one thread.
+ * <p>It is built on a run's engine and uses that run's member modes as the stop events leave them, so a held
+ * member's rows are those of a held member. One instance serves one run on one thread.
  */
 final class ElementJacobian implements JacobianSource {
 
     private final RunEngine engine;
-    private final boolean inferModes;
-
-    /** @param model the model; the modes are inferred from each state and derivative */
-    ElementJacobian(CircuitModel model) {
-        this.engine = new RunEngine(model);
-        this.inferModes = true;
-    }
 
     /** @param engine a run's engine, whose member modes are used as they are */
     ElementJacobian(RunEngine engine) {
         this.engine = engine;
-        this.inferModes = false;
     }
 
     @Override
     public void jacobian(double t, double[] y, double[] f0, double[][] jac) {
-        if (inferModes) {
-            engine.inferModes(y, f0);
-        }
         engine.jacobian(t, y, jac);
     }
 }

@@ -4,6 +4,7 @@ import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.settings.Method;
 import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.solve.stiff.RosenbrockIntegrator;
+import org.branchsim.core.solve.stiff.RosenbrockScheme;
 import org.branchsim.core.solve.stiff.SparsityPattern;
 import org.branchsim.core.solve.stiff.StepMatrixChoice;
 import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
@@ -18,14 +19,23 @@ final class IntegratorFactory {
     /** Steps a Jacobian may serve before it is estimated again. */
     static final int JACOBIAN_MAX_AGE = 1;
 
-    static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol, CircuitModel circuit) {
+    /**
+     * The implicit methods with their own dense output also control its error inside steps (docs/theory.md
+     * section 10; docs/performance.md, "Method choice").
+     */
+    static final boolean INTERIOR_CONTROL = true;
+
+    static AdaptiveStepsizeIntegrator create(SolverSettings s, double[] absTol, double[] relTol, RunEngine engine) {
+        CircuitModel circuit = engine.model();
         switch (s.method()) {
             case IMPLICIT:
+            case IMPLICIT_ORDER3:
                 SparsityPattern pattern = SparsityPattern.ofBlocks(circuit.dimension(), circuit.couplings());
-                RosenbrockIntegrator r = new RosenbrockIntegrator(s.minStep(), s.maxStep(), absTol, relTol,
-                        pattern, JACOBIAN_MAX_AGE);
+                RosenbrockIntegrator r = new RosenbrockIntegrator(scheme(s.method()), s.minStep(), s.maxStep(),
+                        absTol, relTol, pattern, JACOBIAN_MAX_AGE);
                 r.setTimeDependence(circuit::timeDependentAt);
-                r.setJacobianSource(new ElementJacobian(circuit));
+                r.setInteriorErrorControl(INTERIOR_CONTROL);
+                r.setJacobianSource(new ElementJacobian(engine));
                 r.setLinearSolver(StepMatrixChoice.solverFor(pattern));
                 return r;
             case REFERENCE:
@@ -36,10 +46,16 @@ final class IntegratorFactory {
         }
     }
 
+    /** @return the Rosenbrock scheme an implicit method runs */
+    static RosenbrockScheme scheme(Method m) {
+        return m == Method.IMPLICIT_ORDER3 ? RosenbrockScheme.RODAS3 : RosenbrockScheme.RODAS4;
+    }
+
     static String describe(Method m) {
         switch (m) {
             case IMPLICIT:
-                return "implicit " + RosenbrockIntegrator.METHOD_NAME;
+            case IMPLICIT_ORDER3:
+                return "implicit " + scheme(m).name();
             case REFERENCE:
                 return "explicit Dormand-Prince 8(5,3)";
             case EXPLICIT:

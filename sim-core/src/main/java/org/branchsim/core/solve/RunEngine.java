@@ -96,35 +96,6 @@ final class RunEngine {
         model.jacobian(jacobianWork, t, y, jac);
     }
 
-    /**
-     * Sets every member's mode from a state and its derivative alone, for a Jacobian source that is not handed
-     * the run's modes: a member is held when the derivatives of its position and velocity are both exactly zero
-     * (a held member's equations give exactly that) and its position lies within {@link Member#STOP_TOLERANCE}
-     * of the travel from a stop; free otherwise. A free member has dx/dt = v and dv/dt = F/m, both exactly zero
-     * only when it rests with exactly zero net force; taken as held then, its rows differ from the free ones only
-     * by dv/dt's dependence on the states, which the next Jacobian corrects.
-     *
-     * @param y state, SI
-     * @param f0 f(t, y), SI per second
-     */
-    void inferModes(double[] y, double[] f0) {
-        for (int k = 0; k < modes.length; k++) {
-            Member m = members.get(k);
-            int x = position(m.positionSlot());
-            int v = position(m.velocitySlot());
-            double slack = Member.STOP_TOLERANCE * (m.upper() - m.lower());
-            Member.Mode mode = Member.Mode.FREE;
-            if (f0[x] == 0.0 && f0[v] == 0.0) {
-                if (y[x] <= m.lower() + slack) {
-                    mode = Member.Mode.AT_LOWER_STOP;
-                } else if (y[x] >= m.upper() - slack) {
-                    mode = Member.Mode.AT_UPPER_STOP;
-                }
-            }
-            modes[k] = mode;
-        }
-    }
-
     /** @return the values of all signals at (t, y), SI, in the model's signal order */
     double[] sampleSignals(double t, double[] y) {
         double[] out = new double[model.signals().size()];

@@ -17,6 +17,7 @@ import org.branchsim.core.results.EventRecord;
 import org.branchsim.core.results.RunDescription;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.settings.SolverSettings;
+import org.branchsim.core.solve.stiff.RosenbrockIntegrator;
 import org.branchsim.core.results.SolverStatistics;
 import org.branchsim.core.results.Trace;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
@@ -27,15 +28,16 @@ import org.hipparchus.ode.ExpandableODE;
 import org.hipparchus.ode.LocalizedODEFormats;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
-import org.hipparchus.ode.events.AdaptableInterval;
 import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
 import org.hipparchus.exception.LocalizedCoreFormats;
 
 /**
  * Runs a circuit model in time with Hipparchus: the only place that knows the integrator. Each run has its own
  * engine (member modes, impulse ledger, work buffers), so the model is only read and one model may be run many
- * times, on many threads at once. Registers every discontinuity as an event detector, samples the output grid
- * from the dense output, integrates the energy accounts, and turns solver failures into
+ * times, on many threads at once. Registers every discontinuity as an event detector (a member's seats and stops
+ * checked inside steps at a fifth of its natural period), or, for the implicit methods, hands the ones at known
+ * times (schedule corners) to the integrator to land on; samples the output grid from the dense output,
+ * integrates the energy accounts, and turns solver failures into
  * {@link BranchsimException}s naming the time and the states.
  */
 public final class Simulator {
@@ -69,14 +71,21 @@ public final class Simulator {
             absTol[i] = settings.relativeTolerance() * slots.get(i).absoluteScale();
             relTol[i] = settings.relativeTolerance();
         }
-        AdaptiveStepsizeIntegrator integrator = IntegratorFactory.create(settings, absTol, relTol, model);
+        AdaptiveStepsizeIntegrator integrator = IntegratorFactory.create(settings, absTol, relTol, engine);
         integrator.setMaxEvaluations((int) Math.min(Integer.MAX_VALUE, settings.maxEvaluations()));
 
-        AdaptableInterval maxCheck = AdaptableInterval.of(settings.maxStep());
         SharedView views = new SharedView(engine);
+        CheckIntervals intervals = new CheckIntervals(engine, settings.maxStep(), y0);
+        KnownTimes known = integrator instanceof RosenbrockIntegrator ? new KnownTimes(log) : null;
         for (Discontinuity d : model.discontinuities()) {
-            integrator.addEventDetector(new DiscontinuityDetector(engine, views, d, log, maxCheck, 200,
+            if (known != null && known.accepts(d)) {
+                continue;
+            }
+            integrator.addEventDetector(new DiscontinuityDetector(engine, views, d, log, intervals.of(d), 200,
                     new BracketingNthOrderBrentSolver(0.0, settings.eventTolerance(), 0.0, 5)));
+        }
+        if (known != null) {
+            ((RosenbrockIntegrator) integrator).setKnownTimes(known.times(), known::landed);
         }
         GridSampler sampler = new GridSampler(engine, trace, settings.outputInterval(), settings.endTime(), reporter);
         EnergyQuadrature quadrature = new EnergyQuadrature(engine);

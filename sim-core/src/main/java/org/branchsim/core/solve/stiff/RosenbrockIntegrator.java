@@ -8,52 +8,52 @@ import org.hipparchus.ode.LocalizedODEFormats;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
+import org.hipparchus.ode.sampling.AbstractODEStateInterpolator;
 import org.hipparchus.util.FastMath;
 
 /**
- * L-stable, linearly implicit Rosenbrock method of order 3 with an embedded order-2 error estimate: the
- * four-stage, stiffly accurate RODAS3 scheme (Sandu, Verwer, Blom, Spee, Carmichael, Potra, "Benchmarking
- * stiff ODE solvers for atmospheric chemistry problems II: Rosenbrock solvers", Atmospheric Environment
- * 31(20), 1997; form and theory: Hairer and Wanner, Solving Ordinary Differential Equations II, 2nd ed.,
- * 1996, sec. IV.7). Each stage solves (I/(h gamma) - J) K_i = f(t + alpha_i h, y + sum a_ij K_j)
- * + sum (c_ij/h) K_j + h gamma_i f_t with one LU factorisation per step size.
+ * Linearly implicit Rosenbrock integrator with an embedded error estimate, for a {@link RosenbrockScheme}:
+ * RODAS (order 4, Hairer and Wanner, Solving Ordinary Differential Equations II, 2nd ed., 1996, sec. IV.7)
+ * with its own dense output from the stages, or RODAS3 (order 3, Sandu et al. 1997) with cubic Hermite dense
+ * output. Each stage solves (I/(h gamma) - J) u_i = f(t + alpha_i h, y + sum a_ij u_j) + sum (c_ij/h) u_j
+ * + h gamma_i f_t with one LU factorisation per step size.
  * <p>
  * Built on Hipparchus's {@link AdaptiveStepsizeIntegrator} so that event detectors, step handlers and
- * dense output work as for the explicit methods. Dense output is cubic Hermite. The Jacobian is estimated
- * by forward differences ({@link DifferenceJacobian}, step sqrt(eps) relative to the larger of |y_j| and the
- * state's absolute over relative tolerance) grouped by a {@link SparsityPattern}, kept while steps are accepted, and refreshed
- * after a rejected step, after every event reset, and when it has served {@code maxJacobianAge} steps.
- * Forward integration only.
+ * dense output work as for the explicit methods. The Jacobian is estimated by forward differences
+ * ({@link DifferenceJacobian}, step sqrt(eps) relative to the larger of |y_j| and the state's absolute over
+ * relative tolerance) grouped by a {@link SparsityPattern}, or taken from a {@link JacobianSource}; it is kept
+ * while steps are accepted, and refreshed after a rejected step, after every event reset or known time, and
+ * when it has served {@code maxJacobianAge} steps.
+ * <p>
+ * Step size: the standard controller h_new = h min(6, max(0.2, 0.9 err^(-1/q))) (q the order), never growing
+ * right after a rejection (Hairer and Wanner IV.8 and the code RODAS); optionally combined with Gustafsson's
+ * predictive controller (Hairer and Wanner IV.8, eq. (8.21)), taking the smaller of the two. Known times (the
+ * corners of scheduled inputs, the end time) are landed on exactly: a step that would pass one is shortened
+ * to end there, its stages at the corner see the time just before it, and after it the derivative is
+ * recomputed at the corner and the Jacobian refreshed. Forward integration only.
  */
 public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
 
-    /** Method name. */
-    public static final String METHOD_NAME = "Rosenbrock RODAS3 (order 3, L-stable)";
+    /** Name of the default (RODAS3) scheme, kept for callers that named it. */
+    public static final String METHOD_NAME = RosenbrockScheme.RODAS3.name();
 
-    private static final double GAMMA = 0.5;
-    private static final double A31 = 2.0;
-    private static final double A41 = 2.0;
-    private static final double A43 = 1.0;
-    private static final double C21 = 4.0;
-    private static final double C31 = 1.0;
-    private static final double C32 = -1.0;
-    private static final double C41 = 1.0;
-    private static final double C42 = -1.0;
-    private static final double C43 = -8.0 / 3.0;
-    private static final double G1 = 0.5;
-    private static final double G2 = 1.5;
-    private static final double M1 = 2.0;
-    private static final double M3 = 1.0;
-    private static final double M4 = 1.0;
     private static final double SAFETY = 0.9;
     private static final double MIN_FACTOR = 0.2;
     private static final double MAX_FACTOR = 6.0;
-    private static final double ORDER = 3.0;
+    /** Smallest error the predictive controller remembers (as the code RODAS). */
+    private static final double MIN_REMEMBERED_ERROR = 1e-2;
+    /** A step within this fraction of a known time is stretched to land on it. */
+    private static final double STRETCH = 1.01;
     /** Relative finite-difference step, sqrt of the unit round-off. */
     private static final double SQRT_EPS = FastMath.sqrt(Math.ulp(1.0));
 
+    private final RosenbrockScheme scheme;
     private final SparsityPattern pattern;
     private final int maxJacobianAge;
+    private boolean predictive;
+    private boolean interiorControl;
+    private double[] knownTimes = new double[0];
+    private java.util.function.DoubleConsumer knownTimeListener = t -> { };
     private java.util.function.DoublePredicate timeDependent = t -> true;
     private JacobianSource jacobianSource;
     private StepMatrixSolver linearSolver;
@@ -64,6 +64,8 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     private int worstComponent = -1;
 
     /**
+     * RODAS3 integrator (kept for callers that built one before the scheme could be chosen).
+     *
      * @param minStep smallest step, s
      * @param maxStep largest step, s
      * @param absTol absolute tolerance per state
@@ -73,9 +75,60 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
      */
     public RosenbrockIntegrator(double minStep, double maxStep, double[] absTol, double[] relTol,
                                 SparsityPattern pattern, int maxJacobianAge) {
-        super(METHOD_NAME, minStep, maxStep, absTol, relTol);
+        this(RosenbrockScheme.RODAS3, minStep, maxStep, absTol, relTol, pattern, maxJacobianAge);
+    }
+
+    /**
+     * @param scheme the method's coefficients
+     * @param minStep smallest step, s
+     * @param maxStep largest step, s
+     * @param absTol absolute tolerance per state
+     * @param relTol relative tolerance per state
+     * @param pattern Jacobian sparsity (use {@link SparsityPattern#dense} when unknown)
+     * @param maxJacobianAge number of accepted steps a Jacobian may serve (1 = fresh every step)
+     */
+    public RosenbrockIntegrator(RosenbrockScheme scheme, double minStep, double maxStep, double[] absTol,
+                                double[] relTol, SparsityPattern pattern, int maxJacobianAge) {
+        super(scheme.name(), minStep, maxStep, absTol, relTol);
+        this.scheme = scheme;
         this.pattern = pattern;
         this.maxJacobianAge = Math.max(1, maxJacobianAge);
+    }
+
+    /** @return the scheme this integrator runs */
+    public RosenbrockScheme scheme() {
+        return scheme;
+    }
+
+    /** Switches Gustafsson's predictive step-size controller on or off (default off). */
+    public void setPredictiveControl(boolean on) {
+        this.predictive = on;
+    }
+
+    /**
+     * Switches the control of the dense output's error inside steps on or off (default off; only for schemes
+     * with their own dense output). When on, each step also estimates the error of the dense output at a
+     * third of the step (where both a symmetric and an antisymmetric error shape over the step reach about
+     * 3/4 of their peak) from the defect d = y'(t_m) - f(t_m, y(t_m)) of the continuous extension there, as
+     * e = (I/(h gamma) - J)^-1 d (for a stiff component this is d / lambda, the distance to its slow
+     * manifold; for a non-stiff one about h gamma d), and accepts the step only when both this and the
+     * step-end estimate are within tolerance. Costs one evaluation and one solve per step.
+     */
+    public void setInteriorErrorControl(boolean on) {
+        this.interiorControl = on;
+    }
+
+    /**
+     * Times the integrator lands on exactly instead of stepping over them (e.g. the corners of scheduled
+     * inputs); after landing on one it calls {@code listener} with the time, then recomputes the derivative
+     * there and refreshes the Jacobian. Times at or before the start, or at or after the end, are ignored.
+     *
+     * @param times times, s (any order, duplicates allowed)
+     * @param listener told of each landing, once per distinct time, before the derivative is recomputed
+     */
+    public void setKnownTimes(double[] times, java.util.function.DoubleConsumer listener) {
+        this.knownTimes = java.util.Arrays.stream(times).filter(Double::isFinite).sorted().distinct().toArray();
+        this.knownTimeListener = listener;
     }
 
     /**
@@ -108,7 +161,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         return accepted;
     }
 
-    /** @return steps rejected by the error control in the last integration */
+    /** @return steps rejected by the error control (or a singular matrix, or a non-finite stage) in the last integration */
     public long rejectedSteps() {
         return rejected;
     }
@@ -145,27 +198,43 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         if (pattern.dimension() != n) {
             throw new MathIllegalArgumentException(org.hipparchus.exception.LocalizedCoreFormats.DIMENSIONS_MISMATCH, pattern.dimension(), n);
         }
+        int stages = scheme.stages();
         double[][] jac = new double[n][n];
         double[] ft = new double[n];
         StepMatrixSolver lu = linearSolver != null ? linearSolver : new DenseLu(n);
-        double[] k1 = new double[n];
-        double[] k2 = new double[n];
-        double[] k3 = new double[n];
-        double[] k4 = new double[n];
+        double[][] u = new double[stages][n];
         double[] yStage = new double[n];
+        double[] q2 = new double[n];
+        double[] q3 = new double[n];
         DifferenceJacobian differences = differences(n);
+        double exponent = 1.0 / scheme.order();
 
         double[] scale = new double[getStepSizeHelper().getMainSetDimension()];
         for (int i = 0; i < scale.length; i++) {
             scale[i] = getStepSizeHelper().getTolerance(i, FastMath.abs(getStepStart().getCompleteState()[i]));
         }
-        double h = initializeStep(true, 3, scale, getStepStart());
+        double h = initializeStep(true, scheme.order(), scale, getStepStart());
         boolean jacobianFresh = false;
         int jacobianAge = Integer.MAX_VALUE;
+        double previousStep = Double.NaN;
+        double previousError = Double.NaN;
+        int known = 0;
         setIsLastStep(false);
         do {
             ODEStateAndDerivative start = getStepStart();
             double t = start.getTime();
+            while (known < knownTimes.length && knownTimes[known] <= t) {
+                known++;
+            }
+            double next = known < knownTimes.length && knownTimes[known] < finalTime ? knownTimes[known] : finalTime;
+            if (next < finalTime && next - t <= 4 * FastMath.ulp(next)) {
+                // an event stopped the previous step a few ulps before the known time: it is reached
+                setStepStart(land(mapper, start, next));
+                known++;
+                jacobianAge = Integer.MAX_VALUE;
+                previousStep = Double.NaN;
+                continue;
+            }
             double[] y = start.getCompleteState();
             double[] f0 = start.getCompleteDerivative();
             if (jacobianAge >= maxJacobianAge) {
@@ -175,15 +244,25 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
             }
             double error;
             double[] y1 = new double[n];
+            double tEnd;
+            boolean rejectedHere = false;
             while (true) {
-                if (t + h >= finalTime) {
-                    h = finalTime - t;
+                if (t + STRETCH * h >= next) {
+                    tEnd = next;
+                    h = next - t;
+                } else {
+                    tEnd = t + h;
                 }
+                double stageEnd = tEnd == next && next < finalTime ? FastMath.nextDown(tEnd) : tEnd;
                 setStepSize(h);
-                boolean ok = lu.factorise(1.0 / (h * GAMMA), jac);
+                boolean ok = lu.factorise(1.0 / (h * scheme.gamma()), jac);
                 factorisations++;
                 if (ok) {
-                    error = stages(t, y, f0, ft, h, lu, k1, k2, k3, k4, yStage, y1);
+                    error = stages(t, stageEnd, y, f0, ft, h, lu, u, yStage, y1);
+                    if (error <= 1.0 && interiorControl && scheme.dense() == RosenbrockScheme.DenseOutput.STAGES) {
+                        denseCombinations(u, q2, q3);
+                        error = FastMath.max(error, interiorError(t, h, y, y1, q2, q3, lu, yStage));
+                    }
                 } else {
                     error = Double.NaN;
                 }
@@ -191,32 +270,54 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
                     break;
                 }
                 rejected++;
+                rejectedHere = true;
                 if (!jacobianFresh) {
                     estimateJacobian(differences, t, y, f0, h, jac, ft);
                     jacobianFresh = true;
                     jacobianAge = 0;
                 }
                 double factor = Double.isFinite(error)
-                        ? FastMath.max(MIN_FACTOR, SAFETY * FastMath.pow(error, -1.0 / ORDER)) : 0.25;
+                        ? FastMath.max(MIN_FACTOR, SAFETY * FastMath.pow(error, -exponent)) : 0.25;
                 h = getStepSizeHelper().filterStep(h * factor, true, false);
             }
-            double tEnd = t + h;
-            double[] f1 = computeDerivatives(tEnd, y1);
+            boolean landing = tEnd == next && next < finalTime;
+            double[] f1 = computeDerivatives(landing ? FastMath.nextDown(tEnd) : tEnd, y1);
             ODEStateAndDerivative end = mapper.mapStateAndDerivative(tEnd, y1, f1);
             accepted++;
             jacobianAge++;
             jacobianFresh = false;
-            HermiteInterpolator interpolator = new HermiteInterpolator(true, start, end, start, end, mapper);
-            setStepStart(acceptStep(interpolator, finalTime));
-            if (resetOccurred()) {
+            setStepStart(acceptStep(interpolator(start, end, u, mapper), finalTime));
+            boolean reset = resetOccurred();
+            if (reset) {
                 jacobianAge = Integer.MAX_VALUE;
             }
+            if (!isLastStep() && landing && getStepStart().getTime() == tEnd) {
+                setStepStart(land(mapper, getStepStart(), tEnd));
+                known++;
+                jacobianAge = Integer.MAX_VALUE;
+                reset = true;
+            }
             if (!isLastStep()) {
+                double errorSafe = FastMath.max(error, 1e-10);
                 double factor = FastMath.min(MAX_FACTOR, FastMath.max(MIN_FACTOR,
-                        SAFETY * FastMath.pow(FastMath.max(error, 1e-10), -1.0 / ORDER)));
-                double next = getStepSizeHelper().filterStep(h * factor, true, true);
+                        SAFETY * FastMath.pow(errorSafe, -exponent)));
+                if (predictive && !Double.isNaN(previousStep)) {
+                    double gustafsson = SAFETY * (h / previousStep)
+                            * FastMath.pow(previousError / (errorSafe * errorSafe), exponent);
+                    factor = FastMath.min(factor, FastMath.min(MAX_FACTOR, FastMath.max(MIN_FACTOR, gustafsson)));
+                }
+                if (rejectedHere) {
+                    factor = FastMath.min(factor, 1.0);
+                }
+                if (reset) {
+                    previousStep = Double.NaN;
+                } else {
+                    previousStep = h;
+                    previousError = FastMath.max(MIN_REMEMBERED_ERROR, error);
+                }
+                double nextStep = getStepSizeHelper().filterStep(h * factor, true, true);
                 double remaining = finalTime - getStepStart().getTime();
-                h = next >= remaining ? remaining : next;
+                h = nextStep >= remaining ? remaining : nextStep;
                 if (h <= 0.0) {
                     setIsLastStep(true);
                 }
@@ -227,53 +328,138 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         return finalState;
     }
 
-    /** Runs the four stages; returns the scaled error norm (NaN or infinity when the step failed). */
-    private double stages(double t, double[] y, double[] f0, double[] ft, double h, StepMatrixSolver lu,
-                          double[] k1,
-                          double[] k2, double[] k3, double[] k4, double[] yStage, double[] y1) {
+    /** Tells the listener of a known time reached and returns the state there with its derivative recomputed. */
+    private ODEStateAndDerivative land(EquationsMapper mapper, ODEStateAndDerivative state, double time) {
+        knownTimeListener.accept(time);
+        double[] y = state.getCompleteState();
+        return mapper.mapStateAndDerivative(time, y, computeDerivatives(time, y));
+    }
+
+    /** @return the step's dense output (its own arrays: the stage buffers are reused by the next step) */
+    private AbstractODEStateInterpolator interpolator(ODEStateAndDerivative start, ODEStateAndDerivative end,
+                                                      double[][] u, EquationsMapper mapper) {
+        if (scheme.dense() == RosenbrockScheme.DenseOutput.STAGES) {
+            double[] d2 = new double[u[0].length];
+            double[] d3 = new double[u[0].length];
+            denseCombinations(u, d2, d3);
+            return new StageInterpolator(start, end, d2, d3, mapper);
+        }
+        return new HermiteInterpolator(true, start, end, start, end, mapper);
+    }
+
+    /** Fills q2, q3 with the stage combinations of the scheme's dense output. */
+    private void denseCombinations(double[][] u, double[] q2, double[] q3) {
+        int n = q2.length;
+        java.util.Arrays.fill(q2, 0.0);
+        java.util.Arrays.fill(q3, 0.0);
+        for (int j = 0; j < scheme.stages(); j++) {
+            double d2 = scheme.denseCoefficient(0, j);
+            double d3 = scheme.denseCoefficient(1, j);
+            if (d2 == 0.0 && d3 == 0.0) {
+                continue;
+            }
+            double[] uj = u[j];
+            for (int i = 0; i < n; i++) {
+                q2[i] += d2 * uj[i];
+                q3[i] += d3 * uj[i];
+            }
+        }
+    }
+
+    /**
+     * @return the scaled error of the dense output at a third of the step, from its defect there (see
+     *         {@link #setInteriorErrorControl}); NaN when the midpoint's derivative is not finite
+     */
+    private double interiorError(double t, double h, double[] y0, double[] y1, double[] q2, double[] q3,
+                                 StepMatrixSolver lu, double[] work) {
+        int n = y0.length;
+        // theta = 1/3: y = (2 y0 + y1)/3 + 2 q2/9 + 2 q3/27; dy/dt = (y1 - y0 + q2/3 + q3/3)/h
+        for (int i = 0; i < n; i++) {
+            work[i] = (2.0 * y0[i] + y1[i]) / 3.0 + 2.0 * q2[i] / 9.0 + 2.0 * q3[i] / 27.0;
+        }
+        double[] fm = stageDerivatives(t + h / 3.0, work);
+        if (fm == null) {
+            return Double.NaN;
+        }
+        double[] e = new double[n];
+        for (int i = 0; i < n; i++) {
+            e[i] = (y1[i] - y0[i] + (q2[i] + q3[i]) / 3.0) / h - fm[i];
+        }
+        lu.solve(e);
+        double sum = 0.0;
+        int main = getStepSizeHelper().getMainSetDimension();
+        for (int i = 0; i < main; i++) {
+            double tol = getStepSizeHelper().getTolerance(i, FastMath.max(FastMath.abs(y0[i]), FastMath.abs(y1[i])));
+            double r = e[i] / tol;
+            sum += r * r;
+        }
+        return FastMath.sqrt(sum / main);
+    }
+
+    /**
+     * Runs the stages; returns the scaled error norm (NaN or infinity when the step failed).
+     *
+     * @param stageEnd the time stages at the step's end are evaluated at (just before a known time landed on)
+     */
+    private double stages(double t, double stageEnd, double[] y, double[] f0, double[] ft, double h,
+                          StepMatrixSolver lu, double[][] u, double[] yStage, double[] y1) {
         int n = y.length;
-        for (int i = 0; i < n; i++) {
-            k1[i] = f0[i] + h * G1 * ft[i];
+        int s = scheme.stages();
+        for (int i = 0; i < s; i++) {
+            double[] ui = u[i];
+            double[] fi;
+            if (scheme.stageAtStart(i)) {
+                fi = f0;
+            } else {
+                System.arraycopy(y, 0, yStage, 0, n);
+                for (int j = 0; j < i; j++) {
+                    double aij = scheme.a(i, j);
+                    if (aij != 0.0) {
+                        double[] uj = u[j];
+                        for (int k = 0; k < n; k++) {
+                            yStage[k] += aij * uj[k];
+                        }
+                    }
+                }
+                double alpha = scheme.alpha(i);
+                fi = stageDerivatives(alpha == 1.0 ? stageEnd : t + alpha * h, yStage);
+                if (fi == null) {
+                    return Double.NaN;
+                }
+            }
+            double g = h * scheme.gammaSum(i);
+            for (int k = 0; k < n; k++) {
+                ui[k] = fi[k] + g * ft[k];
+            }
+            for (int j = 0; j < i; j++) {
+                double cij = scheme.c(i, j) / h;
+                if (cij != 0.0) {
+                    double[] uj = u[j];
+                    for (int k = 0; k < n; k++) {
+                        ui[k] += cij * uj[k];
+                    }
+                }
+            }
+            lu.solve(ui);
         }
-        lu.solve(k1);
-        for (int i = 0; i < n; i++) {
-            k2[i] = f0[i] + C21 * k1[i] / h + h * G2 * ft[i];
-        }
-        lu.solve(k2);
-        for (int i = 0; i < n; i++) {
-            yStage[i] = y[i] + A31 * k1[i];
-        }
-        double[] f3 = stageDerivatives(t + h, yStage);
-        if (f3 == null) {
-            return Double.NaN;
-        }
-        for (int i = 0; i < n; i++) {
-            k3[i] = f3[i] + (C31 * k1[i] + C32 * k2[i]) / h;
-        }
-        lu.solve(k3);
-        for (int i = 0; i < n; i++) {
-            yStage[i] = y[i] + A41 * k1[i] + A43 * k3[i];
-        }
-        double[] f4 = stageDerivatives(t + h, yStage);
-        if (f4 == null) {
-            return Double.NaN;
-        }
-        for (int i = 0; i < n; i++) {
-            k4[i] = f4[i] + (C41 * k1[i] + C42 * k2[i] + C43 * k3[i]) / h;
-        }
-        lu.solve(k4);
         double sum = 0.0;
         double worst = -1.0;
         int main = getStepSizeHelper().getMainSetDimension();
-        for (int i = 0; i < n; i++) {
-            y1[i] = y[i] + M1 * k1[i] + M3 * k3[i] + M4 * k4[i];
-            if (i < main) {
-                double tol = getStepSizeHelper().getTolerance(i, FastMath.max(FastMath.abs(y[i]), FastMath.abs(y1[i])));
-                double r = k4[i] / tol;
+        for (int k = 0; k < n; k++) {
+            double yk = y[k];
+            double err = 0.0;
+            for (int j = 0; j < s; j++) {
+                yk += scheme.m(j) * u[j][k];
+                err += scheme.e(j) * u[j][k];
+            }
+            y1[k] = yk;
+            if (k < main) {
+                double tol = getStepSizeHelper().getTolerance(k, FastMath.max(FastMath.abs(y[k]), FastMath.abs(yk)));
+                double r = err / tol;
                 sum += r * r;
                 if (!(Math.abs(r) <= worst)) {
                     worst = Math.abs(r);
-                    worstComponent = i;
+                    worstComponent = k;
                 }
             }
         }
