@@ -149,6 +149,12 @@ public final class Accumulator implements Element {
         return GasSpring.polytropicPressure(workingPrecharge, gas.volume(), vg, gas.exponent());
     }
 
+    /** @return true for a polytropic charge (closed-form partials); a thermal one takes the fallback */
+    @Override
+    public boolean suppliesPartials() {
+        return !gas.thermal();
+    }
+
     @Override
     public void evaluate(Evaluation e) {
         double vf = e.value(fluidVolume);
@@ -161,6 +167,9 @@ public final class Accumulator implements Element {
         double q = OrificeLaw.flow(inletCd, inletArea * open, dp, density, transition);
         e.inflow(port, -q);
         e.derivative(fluidVolume, q);
+        if (e.partials()) {
+            addPartials(e, vf, t, dp, seal, open);
+        }
         if (gas.thermal()) {
             e.derivative(gasTemperature, GasSpring.temperatureRate(t, gas.volume() - vf, -q, wallTemperature,
                     gas.thermalTimeConstant(), GasSpring.NITROGEN_GAMMA));
@@ -174,6 +183,26 @@ public final class Accumulator implements Element {
             e.power(inletLoss, dp * q);
             e.power(gasStored, pGas * q);
         }
+    }
+
+    /**
+     * The closed-form partials of the polytropic accumulator (the thermal one takes the finite-difference
+     * fallback): q = Q(A_in open(V_f), p_port - p_gas(V_f)) with the orifice law's slope dQ/d(dp), the gas
+     * spring's dp_gas/dV_f = n p_gas,abs / V_gas (V_gas = V_0 - V_f), and Q linear in the area (the transition
+     * pressure being that of the full inlet).
+     */
+    private void addPartials(Evaluation e, double vf, double temperature, double dp, double seal, double open) {
+        double slope = OrificeLaw.slope(inletCd, inletArea * open, dp, density, transition);
+        double gasVolumeNow = gas.volume() - vf;
+        double dpGasdVf = gas.exponent() * absoluteGasPressure(vf, temperature) / gasVolumeNow;
+        double fraction = dp < 0.0 ? vf / seal : (capacity - vf) / seal;
+        double dOpen = fraction <= 0.0 || fraction >= 1.0 ? 0.0 : (dp < 0.0 ? 1.0 : -1.0) / seal;
+        double fullOpenFlow = OrificeLaw.flow(inletCd, inletArea, dp, density, transition);
+        double dqdVf = -slope * dpGasdVf + fullOpenFlow * dOpen;
+        e.inflowPartial(port, port, -slope);
+        e.inflowPartial(port, fluidVolume, -dqdVf);
+        e.derivativePartial(fluidVolume, port, slope);
+        e.derivativePartial(fluidVolume, fluidVolume, dqdVf);
     }
 
     private static double clamp(double f) {

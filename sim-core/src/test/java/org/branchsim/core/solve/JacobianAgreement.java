@@ -51,6 +51,18 @@ public final class JacobianAgreement {
      * @return the largest disagreement found, relative as in the class comment
      */
     public static double check(CircuitModel model, Map<String, Member.Mode> held, double t, double[] y, String where) {
+        return check(model, held, t, y, where, TOLERANCE);
+    }
+
+    /**
+     * As {@link #check(CircuitModel, Map, double, double[], String)} with another tolerance in place of
+     * {@link #TOLERANCE}, for Jacobians that are themselves difference estimates (the per-element fallback).
+     *
+     * @param tolerance the relative tolerance
+     * @return the largest disagreement found
+     */
+    public static double check(CircuitModel model, Map<String, Member.Mode> held, double t, double[] y, String where,
+                               double tolerance) {
         List<Member> members = model.members();
         Member.Mode[] modes = new Member.Mode[members.size()];
         for (int k = 0; k < modes.length; k++) {
@@ -88,10 +100,10 @@ public final class JacobianAgreement {
                 double sj = states.get(j).absoluteScale();
                 double a = analytic[i][j] * sj / si;
                 double d = differences[i][j] * sj / si;
-                double allowed = TOLERANCE * Math.max(Math.abs(a), Math.abs(d)) + ROW_FLOOR * rowMax;
-                double error = allowed == 0.0 ? 0.0 : TOLERANCE * Math.abs(a - d) / allowed;
+                double allowed = tolerance * Math.max(Math.abs(a), Math.abs(d)) + ROW_FLOOR * rowMax;
+                double error = allowed == 0.0 ? 0.0 : tolerance * Math.abs(a - d) / allowed;
                 worst = Math.max(worst, error);
-                if (error > TOLERANCE) {
+                if (error > tolerance) {
                     StringBuilder estimates = new StringBuilder();
                     for (double[][] level : sweep) {
                         estimates.append(String.format(java.util.Locale.ROOT, " %.9g", level[i][j]));
