@@ -88,7 +88,15 @@ public enum ErrorKey {
     /** Every variant of a study failed, so the study has no result (nothing is written). */
     STUDY_FAILED(false, "all {0} variants failed, nothing written; the first failure (variant {1}): {2}"),
     /** A characteristic was asked of a scenario that lacks what it needs (a reducing valve, a ramp). */
-    NOTHING_TO_CHARACTERISE(true, "{0}: no characteristic can be drawn: {1}");
+    NOTHING_TO_CHARACTERISE(true, "{0}: no characteristic can be drawn: {1}"),
+    /** A measured (data-logger) file has a mistake at a place: file, line, column, the column's name. */
+    MEASURED_FILE_INVALID(true, "{0}:{1}:{2}: column \"{3}\": expected {4}, found {5}"),
+    /** Measured channels cannot be aligned with the simulation (no trigger crossing, no overlap). */
+    ALIGNMENT_FAILED(true, "alignment {0}: expected {1}, found {2}"),
+    /** A specification file (tune) has a mistake at a place. */
+    SPEC_INVALID(true, "{0}:{1}:{2}: {3}: expected {4}, found {5}"),
+    /** Every start of a fit or a design search failed to run the model; the first failure is given. */
+    ESTIMATION_FAILED(false, "{0}: every model run failed; the first failure: {1}");
 
     private final boolean inputError;
     private final String pattern;
