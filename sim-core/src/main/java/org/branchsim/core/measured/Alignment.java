@@ -13,7 +13,7 @@ import org.branchsim.core.error.ErrorKey;
  */
 public final class Alignment {
 
-    /** Least share of the simulated record that a lag's overlap must cover to be considered. */
+    /** Least share of the shorter record that a lag's overlap must cover to be considered. */
     public static final double LEAST_OVERLAP = 0.5;
 
     private Alignment() {
@@ -67,7 +67,7 @@ public final class Alignment {
         double[] grid = Resampling.grid(mt[0], mt[mt.length - 1], dt);
         double[] m = Resampling.linear(mt, mx, grid);
         int n = sx.length;
-        int least = (int) Math.ceil(LEAST_OVERLAP * n);
+        int least = Math.max(3, (int) Math.ceil(LEAST_OVERLAP * Math.min(n, m.length)));
         // lag L (in grid steps) pairs sx[i] with m[i + L - first], i.e. measured time st[i] + offset
         int first = (int) Math.round((grid[0] - st[0]) / dt);
         int lo = -(n - least) + first;
@@ -84,7 +84,7 @@ public final class Alignment {
         }
         if (bestLag == Integer.MIN_VALUE || !Double.isFinite(best)) {
             throw new BranchsimException(ErrorKey.ALIGNMENT_FAILED, "by cross-correlation",
-                    "records that overlap by at least half the simulated time and vary",
+                    "records that overlap by at least half the shorter one and vary",
                     "no lag with a finite correlation (a flat record, or records too short)");
         }
         double frac = 0.0;

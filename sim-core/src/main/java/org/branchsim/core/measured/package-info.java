@@ -4,6 +4,7 @@
  * signals, alignment of the logger's time base with the simulation (by a trigger crossing or by
  * cross-correlation) and linear resampling. Values are converted to SI on reading.
  *
- * <p>Dependencies: {@code units}, {@code error}. Reads text, never files (the command line reads them).
+ * <p>Dependencies: {@code analysis} (the spectral oscillation detector), {@code units}, {@code error}. Reads text,
+ * never files (the command line reads them).
  */
 package org.branchsim.core.measured;
