@@ -153,6 +153,25 @@ class LeastSquaresFitTest {
     }
 
     @Test
+    void aModelThatFailsEverywhereIsReported() {
+        ResidualModel broken = new ResidualModel() {
+            @Override
+            public int parameters() {
+                return 2;
+            }
+
+            @Override
+            public List<double[]> residuals(List<double[]> points) {
+                return java.util.Collections.nCopies(points.size(), null);
+            }
+        };
+        org.branchsim.core.error.BranchsimException e = org.junit.jupiter.api.Assertions.assertThrows(
+                org.branchsim.core.error.BranchsimException.class,
+                () -> LeastSquaresFit.fit(broken, LeastSquaresFit.starts(2, 3, null), 1, 5, List.of("a", "b")));
+        assertEquals(org.branchsim.core.error.ErrorKey.ESTIMATION_FAILED, e.key());
+    }
+
+    @Test
     void aParameterWithoutEffectIsNotIdentifiable() {
         // Belsley, Kuh and Welsch 1980, ch. 3: a zero column of J (the parameter changes nothing) leaves
         // J^T J singular; two equal columns make it singular too
