@@ -158,11 +158,11 @@ public final class CompareCommand implements Callable<Integer> {
             KeyEvents k = c.simulated();
             text.append(String.format(Locale.ROOT, "  %-16s %14s %14s %14s%n", "key event", "measured", "simulated",
                     "sim - meas"));
-            row(text, "landing [s]", m.landingTime(), k.landingTime(), 1, 0);
-            row(text, "peak [" + u.symbol() + "]", u.fromSi(m.peak()), u.fromSi(k.peak()), 1, 0);
-            row(text, "peak time [s]", m.peakTime(), k.peakTime(), 1, 0);
-            row(text, "settled [" + u.symbol() + "]", u.fromSi(m.settled()), u.fromSi(k.settled()), 1, 0);
-            row(text, "settling [s]", m.settlingTime(), k.settlingTime(), 1, 0);
+            row(text, "landing [s]", m.landingTime(), k.landingTime());
+            row(text, "peak [" + u.symbol() + "]", u.fromSi(m.peak()), u.fromSi(k.peak()));
+            row(text, "peak time [s]", m.peakTime(), k.peakTime());
+            row(text, "settled [" + u.symbol() + "]", u.fromSi(m.settled()), u.fromSi(k.settled()));
+            row(text, "settling [s]", m.settlingTime(), k.settlingTime());
         }
         ArrayNode osc = o.putArray("measuredOscillations");
         if (c.oscillations().isEmpty()) {
@@ -202,9 +202,8 @@ public final class CompareCommand implements Callable<Integer> {
         return best;
     }
 
-    private static void row(StringBuilder sb, String name, double meas, double sim, double scale, double shift) {
-        sb.append(String.format(Locale.ROOT, "  %-16s %14s %14s %14s%n", name, fmt(meas * scale + shift),
-                fmt(sim * scale + shift), fmt((sim - meas) * scale)));
+    private static void row(StringBuilder sb, String name, double meas, double sim) {
+        sb.append(String.format(Locale.ROOT, "  %-16s %14s %14s %14s%n", name, fmt(meas), fmt(sim), fmt(sim - meas)));
     }
 
     private static ObjectNode events(KeyEvents e, Unit u) {
