@@ -12,7 +12,8 @@ import picocli.CommandLine.Command;
 @Command(name = "branchsim", mixinStandardHelpOptions = true, version = "branchsim 0.1.0",
         description = "Time-domain simulation of hydraulic circuits with a pressure-reducing branch.",
         subcommands = {RunCommand.class, CheckCommand.class, SweepCommand.class, ModesCommand.class,
-            CharacteristicCommand.class, DiagnoseCommand.class, DiagramCommand.class, ToleranceCommand.class, MergeCommand.class, TimingCommand.class,
+            CharacteristicCommand.class, DiagnoseCommand.class, DiagramCommand.class, CompareCommand.class,
+            FitCommand.class, TuneCommand.class, ToleranceCommand.class, MergeCommand.class, TimingCommand.class,
             SchemaCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Exit codes: 0 success, 1 simulation failed, 2 bad input or usage.",
             "Caution: " + Cautions.SHORT})

@@ -38,9 +38,9 @@ class OptionRefusalTest {
 
     @Test
     void unknownCommandWithHelpIsNamed() {
-        RunCommandTest.Outcome o = RunCommandTest.run("fit", "--help");
+        RunCommandTest.Outcome o = RunCommandTest.run("fly", "--help");
         assertEquals(2, o.code());
-        assertTrue(o.err().contains("unknown command \"fit\""), o.err());
+        assertTrue(o.err().contains("unknown command \"fly\""), o.err());
         assertTrue(o.err().contains("run, check, sweep"), o.err());
     }
 

@@ -90,7 +90,15 @@ public enum ErrorKey {
     /** A characteristic was asked of a scenario that lacks what it needs (a reducing valve, a ramp). */
     NOTHING_TO_CHARACTERISE(true, "{0}: no characteristic can be drawn: {1}"),
     /** The spill space (a temporary file) that holds a long run's samples beyond the memory budget fails. */
-    TRACE_STORE_FAILED(false, "cannot keep the samples of the run outside the heap, in {0}: {1}");
+    TRACE_STORE_FAILED(false, "cannot keep the samples of the run outside the heap, in {0}: {1}"),
+    /** A measured (data-logger) file has a mistake at a place: file, line, column, the column's name. */
+    MEASURED_FILE_INVALID(true, "{0}:{1}:{2}: column \"{3}\": expected {4}, found {5}"),
+    /** Measured channels cannot be aligned with the simulation (no trigger crossing, no overlap). */
+    ALIGNMENT_FAILED(true, "alignment {0}: expected {1}, found {2}"),
+    /** A specification file (tune) has a mistake at a place. */
+    SPEC_INVALID(true, "{0}:{1}:{2}: {3}: expected {4}, found {5}"),
+    /** Every start of a fit or a design search failed to run the model; the first failure is given. */
+    ESTIMATION_FAILED(false, "{0}: every model run failed; the first failure: {1}");
 
     private final boolean inputError;
     private final String pattern;
