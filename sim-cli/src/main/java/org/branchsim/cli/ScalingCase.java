@@ -13,6 +13,7 @@ import java.util.Locale;
 import org.branchsim.core.analysis.TraceComparison;
 import org.branchsim.core.model.CircuitModel;
 import org.branchsim.core.model.Evaluation;
+import org.branchsim.core.model.JacobianWorkspace;
 import org.branchsim.core.model.Member;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.SolverStatistics;
@@ -22,7 +23,7 @@ import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.scenario.ScenarioLoader;
 import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.solve.Simulator;
-import org.branchsim.core.solve.stiff.DifferenceJacobian;
+import org.branchsim.core.solve.stiff.RosenbrockScheme;
 import org.branchsim.core.solve.stiff.SparsityPattern;
 import org.branchsim.core.solve.stiff.StepMatrixChoice;
 import org.branchsim.core.solve.stiff.StepMatrixSolver;
@@ -33,7 +34,7 @@ import org.branchsim.core.units.Dimension;
  * The size-scaling case of {@code timing --scaling}: one reducing valve's branch copied 1, 2, 4, ... times onto
  * the same supply ({@link BranchReplica}), each size run with dense and with sparse LU side by side on this
  * thread. Per size and solver it records the states, steps, the thread's CPU time per run (median and least) and
- * the least per accepted step (s), and splits a step's CPU into the Jacobian's evaluations, the LU work and the stages' evaluations, each
+ * the least per accepted step (s), and splits a step's CPU into the Jacobian (from the elements' partials), the LU work and the evaluations, each
  * measured by repeating that part alone at the run's final state; then fits the exponent of CPU per step against
  * the number of states by least squares on logarithms.
  */
@@ -41,13 +42,13 @@ final class ScalingCase {
 
     /** Least CPU time, s, over which a part of a step is repeated to time it. */
     private static final double PART_TIMING_CPU = 0.02;
-    /** The Rosenbrock method's diagonal coefficient gamma (RODAS3), for the part timing's d = 1 / (h gamma). */
-    private static final double GAMMA = 0.5;
+    /** The default implicit method's scheme: its gamma (d = 1 / (h gamma)) and its solves per attempted step. */
+    private static final RosenbrockScheme SCHEME = RosenbrockScheme.RODAS4;
 
     /** One size with one solver. */
     record Measurement(int copies, int states, int jacobianGroups, StepMatrixChoice.Kind kind, long steps,
                        long rejected, long evaluations, long jacobians, long factorisations, double cpuMedian,
-                       double cpuMin, double evaluationCpu, double factoriseCpu, double solveCpu,
+                       double cpuMin, double evaluationCpu, double jacobianCpu, double factoriseCpu, double solveCpu,
                        double pressureDifference) {
 
         /**
@@ -58,19 +59,25 @@ final class ScalingCase {
             return cpuMin / steps;
         }
 
-        /** @return CPU of the finite-difference Jacobians per accepted step, s (one evaluation per column group) */
+        /** @return CPU of the Jacobians (assembled from the elements' partials) per accepted step, s */
         double jacobianPerStep() {
-            return (double) jacobians * jacobianGroups * evaluationCpu / steps;
+            return (double) jacobians * jacobianCpu / steps;
         }
 
-        /** @return CPU of factorisations and the four solves of each attempted step per accepted step, s */
+        /**
+         * @return CPU of the factorisations and of each attempted step's solves (one per stage and one for the
+         *         interior error check) per accepted step, s
+         */
         double luPerStep() {
-            return factorisations * (factoriseCpu + 4 * solveCpu) / steps;
+            return factorisations * (factoriseCpu + (SCHEME.stages() + 1) * solveCpu) / steps;
         }
 
-        /** @return CPU of the stage evaluations (two per attempt, one at each accepted step's end) per step, s */
+        /**
+         * @return CPU of every evaluation of the equations (stages, step ends, interior checks, output samples,
+         *         energy midpoints: all that the run counted) per accepted step, s
+         */
         double stagesPerStep() {
-            return (2.0 * factorisations + steps) * evaluationCpu / steps;
+            return evaluations * evaluationCpu / steps;
         }
     }
 
@@ -202,7 +209,7 @@ final class ScalingCase {
         MetricsReport.putFinite(fits, "asChosenLuOnly", lu);
         MetricsReport.putFinite(fits, "jacobianOnly", jacobian);
         w.printf(Locale.ROOT, "as chosen (sparse from %d states): CPU per step grows as n^%.2f; without the "
-                + "finite-difference Jacobian n^%.2f; LU alone n^%.2f; the Jacobian alone n^%.2f%n",
+                + "Jacobian n^%.2f; LU alone n^%.2f; the Jacobian alone n^%.2f%n",
                 StepMatrixChoice.SPARSE_FROM_STATES, e, withoutJacobian, lu, jacobian);
         folder.writeText("scaling.json", MetricsReport.toJson(root));
         folder.writeText("scaling.csv", csv.toString());
@@ -257,15 +264,15 @@ final class ScalingCase {
                     : TraceComparison.maxErrorOverRange(last.trace(), dense.trace(), Dimension.PRESSURE);
             return new Measurement(copies, model.dimension(), pattern.groupCount(), kind, st.acceptedSteps(),
                     st.rejectedSteps(), st.evaluations(), st.jacobians(), st.factorisations(), cpus[cpus.length / 2],
-                    cpus[0], partCpu[0], partCpu[1], partCpu[2], difference);
+                    cpus[0], partCpu[0], partCpu[1], partCpu[2], partCpu[3], difference);
         });
     }
 
     /**
-     * Times the parts of a step at one state by repetition: one evaluation of the equations, one factorisation of
-     * d I - J with d = 1 / (h gamma) for the mean step h, one solve.
+     * Times the parts of a step at one state by repetition: one evaluation of the equations, one Jacobian from the
+     * elements' partials, one factorisation of d I - J with d = 1 / (h gamma) for the mean step h, one solve.
      *
-     * @return {evaluation, factorisation, solve} CPU, s each
+     * @return {evaluation, Jacobian, factorisation, solve} CPU, s each
      */
     private double[] partCpu(CircuitModel model, SparsityPattern pattern, double t, double[] y, double meanStep) {
         int n = model.dimension();
@@ -273,33 +280,19 @@ final class ScalingCase {
         Arrays.fill(modes, Member.Mode.FREE);
         Evaluation work = model.workspace(modes, new double[model.accounts().size()]);
         double[] f0 = new double[n];
-        double[] typical = new double[n];
-        for (int i = 0; i < n; i++) {
-            typical[i] = model.states().get(i).absoluteScale();
-        }
         double evaluation = repeat(() -> model.evaluate(work, t, y, f0, null, null));
         double[][] jac = new double[n][n];
-        int[] all = new int[n];
-        Arrays.setAll(all, i -> i);
-        new DifferenceJacobian(DifferenceJacobian.Scheme.FORWARD, 1e-7, typical, DifferenceJacobian.singleColumns(all))
-                .estimate(yp -> {
-                    double[] f = new double[n];
-                    model.evaluate(work, t, yp, f, null, null);
-                    return f;
-                }, y, f0, (column, quotient) -> {
-                    for (int i = 0; i < n; i++) {
-                        jac[i][column] = quotient.applyAsDouble(i);
-                    }
-                });
+        JacobianWorkspace jacobianWork = model.jacobianWorkspace(modes, new double[model.accounts().size()]);
+        double jacobian = repeat(() -> model.jacobian(jacobianWork, t, y, jac));
         StepMatrixSolver solver = StepMatrixChoice.solverFor(pattern);
-        double d = 1.0 / (meanStep * GAMMA);
+        double d = 1.0 / (meanStep * SCHEME.gamma());
         double factorise = repeat(() -> solver.factorise(d, jac));
         double[] b = new double[n];
         double solve = repeat(() -> {
             Arrays.fill(b, 1.0);
             solver.solve(b);
         });
-        return new double[] {evaluation, factorise, solve};
+        return new double[] {evaluation, jacobian, factorise, solve};
     }
 
     /** @return the thread's CPU time of one call of {@code part}, s, repeated for at least PART_TIMING_CPU */

@@ -22,12 +22,16 @@ import org.jfree.chart.ui.RectangleInsets;
  * distinct colours and dashes of {@link TraceCharts#compare} and a legend; past that, a legend grows too long to
  * read, so the curves are ordered by the varied value and coloured from a sequential {@link ColourMap} (lowest
  * value darkest) with a colour bar on the right, labelled with the varied parameter and its unit, in place of the
- * legend. Carries the simulation caution.
+ * legend. Past {@link #MAX_DRAWN} variants, that many are drawn, evenly spaced in the order of the varied value
+ * (the lowest and the highest always among them), and a subtitle says how many of how many: a thousand curves
+ * would hide each other and cost some hundred megabytes of chart data. Carries the simulation caution.
  */
 public final class SweepOverlay {
 
     /** Most variants drawn with a legend. */
     public static final int MAX_LEGEND = 6;
+    /** Most variants drawn in one colour-mapped overlay. */
+    public static final int MAX_DRAWN = 100;
 
     private SweepOverlay() {
     }
@@ -65,8 +69,9 @@ public final class SweepOverlay {
             return TraceCharts.compareChart(variants.stream().map(Variant::run).toList(), signal, title, units,
                     Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY);
         }
-        List<Variant> sorted = new ArrayList<>(variants);
-        sorted.sort(Comparator.comparingDouble(Variant::value));
+        List<Variant> all = new ArrayList<>(variants);
+        all.sort(Comparator.comparingDouble(Variant::value));
+        List<Variant> sorted = evenlySpaced(all, MAX_DRAWN);
         JFreeChart chart = TraceCharts.compareChart(sorted.stream().map(Variant::run).toList(), signal, title, units,
                 Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY);
         chart.removeLegend();
@@ -81,7 +86,29 @@ public final class SweepOverlay {
             r.setSeriesStroke(k, solid);
         }
         chart.addSubtitle(colourBar(map, varied));
+        if (sorted.size() < all.size()) {
+            chart.addSubtitle(new org.jfree.chart.title.TextTitle(sorted.size() + " of " + all.size()
+                    + " variants drawn, evenly spaced by " + varied, new Font(Font.SANS_SERIF, Font.PLAIN, 11)));
+        }
         return chart;
+    }
+
+    /**
+     * @param sorted variants in order of their value
+     * @param most the most to keep
+     * @return all of them when there are no more than {@code most}; else {@code most} of them at evenly spaced
+     *         positions, the first and the last included
+     */
+    static List<Variant> evenlySpaced(List<Variant> sorted, int most) {
+        int n = sorted.size();
+        if (n <= most) {
+            return sorted;
+        }
+        List<Variant> out = new ArrayList<>(most);
+        for (int k = 0; k < most; k++) {
+            out.add(sorted.get((int) Math.round(k * (n - 1.0) / (most - 1.0))));
+        }
+        return out;
     }
 
     /** @return a vertical colour bar on the right of the plot, its axis labelled with the quantity it maps */

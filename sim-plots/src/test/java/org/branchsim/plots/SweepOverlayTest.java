@@ -95,6 +95,24 @@ class SweepOverlayTest {
     }
 
     @Test
+    void aThousandVariantsDrawAHundredEvenlySpacedWithTheFullColourRange() {
+        JFreeChart chart = SweepOverlay.chart(variants(1000), "out.p", "d [mm]", "thousand", UnitSystem.METRIC);
+        assertEquals(SweepOverlay.MAX_DRAWN, chart.getXYPlot().getDataset().getSeriesCount());
+        // the bar still spans the lowest and the highest value of all variants: 0.1 mm to 100.0 mm
+        PaintScaleLegend bar = colourBar(chart);
+        assertEquals(0.1, bar.getScale().getLowerBound(), 1e-9);
+        assertEquals(100.0, bar.getScale().getUpperBound(), 1e-9);
+        boolean said = false;
+        for (int i = 0; i < chart.getSubtitleCount(); i++) {
+            if (chart.getSubtitle(i) instanceof org.jfree.chart.title.TextTitle t
+                    && t.getText().startsWith("100 of 1000 variants drawn")) {
+                said = true;
+            }
+        }
+        assertTrue(said, "the figure says how many variants it draws");
+    }
+
+    @Test
     void mapRunsFromViridisDarkToLightWithRisingLuma() {
         assertEquals(new Color(0x440154), ColourMap.at(0));
         assertEquals(new Color(0xfde725), ColourMap.at(1));
