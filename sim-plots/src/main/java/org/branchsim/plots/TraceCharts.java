@@ -370,7 +370,15 @@ public final class TraceCharts {
         for (int k = 0; k < runs.size(); k++) {
             style(renderer, k, 1.4f);
         }
-        XYPlot plot = new XYPlot(data, timeAxis(), y, renderer);
+        // the time axis spans the samples drawn, no margin past them (nor past the end time)
+        NumberAxis t = timeAxis();
+        double first = data.getDomainLowerBound(false);
+        double last = data.getDomainUpperBound(false);
+        if (last > first) {
+            t.setAutoRange(false);
+            t.setRange(first, last);
+        }
+        XYPlot plot = new XYPlot(data, t, y, renderer);
         plot.setBackgroundPaint(Color.WHITE);
         plot.setDomainGridlinePaint(new Color(0xd0d0d0));
         plot.setRangeGridlinePaint(new Color(0xd0d0d0));

@@ -142,6 +142,9 @@ class TraceChartsTest {
             assertEquals(0.050, data.getXValue(s, 29), 1e-12);
         }
         assertEquals(0.5 * pressureA(0.03) / 1e5, data.getYValue(1, 9), 1e-9);
+        // the time axis spans the samples drawn and no more (issue 13 item 3: no axis past the end time)
+        assertEquals(0.021, plot(chart).getDomainAxis().getLowerBound(), 1e-12);
+        assertEquals(0.050, plot(chart).getDomainAxis().getUpperBound(), 1e-12);
         assertEquals("a.p [bar]", plot(chart).getRangeAxis().getLabel());
         assertNotNull(chart.getLegend());
         assertTrue(hasCaution(chart));
