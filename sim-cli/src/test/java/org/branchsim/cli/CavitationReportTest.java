@@ -54,6 +54,19 @@ class CavitationReportTest {
     }
 
     @Test
+    void theOtherDemosReportNoCavitation(@TempDir Path dir) throws IOException {
+        for (String demo : new String[] {"feed-stall", "gripper-chatter", "pilot-supply-hunting",
+            "press-two-branches"}) {
+            Path out = dir.resolve(demo);
+            RunCommandTest.Outcome o = RunCommandTest.run("run",
+                    RunCommandTest.SCENARIOS.resolve(demo + ".json").toString(), "--out", out.toString());
+            assertEquals(0, o.code(), o.err());
+            JsonNode m = new ObjectMapper().readTree(out.resolve("metrics.json").toFile());
+            assertFalse(m.at("/cavitation/found").asBoolean(), demo + ": " + m.get("cavitation"));
+        }
+    }
+
+    @Test
     void theFixtureClampReportsItsClampForceAndNoCavitation(@TempDir Path dir) throws IOException {
         RunCommandTest.Outcome o = RunCommandTest.run("run",
                 RunCommandTest.SCENARIOS.resolve("fixture-clamp.json").toString(), "--out", dir.toString());

@@ -213,6 +213,10 @@ public final class Cylinder implements Element {
         leakLoss = b.account("leakage", EnergyAccount.Kind.LOSS);
         for (int k = 0; k < tablePositions.length; k++) {
             double row = tablePositions[k];
+            if (row <= 0.0 || row >= p.stroke()) {
+                continue; // a kink at or beyond an end stop is never crossed in free motion (and a held piston
+                          // would sit on it: a switching function must not stay at zero)
+            }
             b.discontinuity(new Corner(id, "passes load table row " + (k + 1), "corner",
                     s -> piston.position(s) - row));
         }
