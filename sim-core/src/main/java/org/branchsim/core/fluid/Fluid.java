@@ -22,7 +22,10 @@ public final class Fluid {
      */
     public static final double DEFAULT_RELEASE_PRESSURE = -0.7e5;
 
-    /** Default amount of air that can come out of solution, volume fraction at atmospheric pressure (common practice, no source). */
+    /**
+     * Default amount of air that can come out of solution by absolute vacuum, volume fraction at atmospheric
+     * pressure (common practice, no source).
+     */
     public static final double DEFAULT_RELEASABLE_AIR = 0.01;
 
     private final double density;
