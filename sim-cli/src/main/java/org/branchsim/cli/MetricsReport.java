@@ -6,6 +6,8 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
+import org.branchsim.core.analysis.CavitationFinding;
+import org.branchsim.core.analysis.CylinderMetrics;
 import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import java.util.Map;
@@ -62,9 +64,70 @@ public final class MetricsReport {
         for (OscillationFinding f : oscillations) {
             osc.add(DiagnosisJson.finding(f, units));
         }
+        root.set("cylinders", cylinders(CylinderMetrics.of(result, scenario.metricsFrom(), scenario.metricsTo()),
+                units, scenario.metricsFrom(), scenario.metricsTo()));
+        root.set("cavitation", cavitation(CavitationFinding.of(result), result.model().fluid().releasePressure(),
+                units));
         root.set("energy", energy(result.energy(), units));
         root.set("solver", solver(result.statistics()));
         return root;
+    }
+
+    /** The cylinders' forces: what each is measured from, its unit, peak, final value and mean over the window. */
+    static ArrayNode cylinders(List<CylinderMetrics> list, UnitSystem units, double from, double to) {
+        Unit f = units.displayUnit(Dimension.FORCE);
+        ArrayNode arr = MAPPER.createArrayNode();
+        for (CylinderMetrics m : list) {
+            ObjectNode o = arr.addObject();
+            o.put("id", m.id());
+            o.put("forceUnit", f.symbol());
+            o.put("windowFrom_s", from);
+            o.put("windowTo_s", to);
+            ObjectNode force = o.putObject("cylinderForce");
+            force.put("measuredFrom", "chamber pressures on the piston areas, p_cap A_cap - p_rod A_rod, "
+                    + "positive extending");
+            forceFigures(force, m.force(), f);
+            if (m.clamp() != null) {
+                ObjectNode clamp = o.putObject("clampForce");
+                clamp.put("measuredFrom", "contact force of the piston on the work-piece (stiffness times "
+                        + "penetration plus faded damping, never pulling)");
+                forceFigures(clamp, m.clamp(), f);
+            }
+        }
+        return arr;
+    }
+
+    private static void forceFigures(ObjectNode o, CylinderMetrics.Figures g, Unit f) {
+        o.put("peak", round(f.fromSi(g.peak())));
+        o.put("peakTime_s", round(g.peakTime()));
+        o.put("final", round(f.fromSi(g.last())));
+        putFinite(o, "windowMean", round(f.fromSi(g.windowMean())));
+    }
+
+    /**
+     * The cavitation report: the threshold (air-release pressure, gauge, in the display unit) and every node that
+     * fell below it, with when, how long, and its lowest absolute pressure; the result there is uncertain.
+     */
+    static ObjectNode cavitation(List<CavitationFinding> list, double threshold, UnitSystem units) {
+        Unit p = units.displayUnit(Dimension.PRESSURE);
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("pressureUnit", p.symbol());
+        o.put("threshold", round(p.fromSi(threshold)));
+        o.put("thresholdMeaning", "air-release pressure (gauge): below it dissolved air comes out of solution");
+        o.put("measuredOn", "output samples");
+        o.put("found", !list.isEmpty());
+        ArrayNode nodes = o.putArray("nodes");
+        for (CavitationFinding f : list) {
+            ObjectNode n = nodes.addObject();
+            n.put("node", f.node());
+            n.put("firstBelow_s", round(f.firstTime()));
+            n.put("durationBelow_s", round(f.duration()));
+            n.put("minimumAbsolutePressure", round(p.fromSi(f.minimumAbsolute()) - p.fromSi(0.0)));
+            n.put("minimumTime_s", round(f.minimumTime()));
+            n.put("uncertain", "air release is modelled as instant and reversible; pressures and flows at this node "
+                    + "are uncertain while it is below the threshold");
+        }
+        return o;
     }
 
     static ArrayNode reducingValves(List<ReducingValveMetrics> list, UnitSystem units, double from, double to) {

@@ -5,6 +5,8 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import java.util.List;
+import org.branchsim.core.analysis.CavitationFinding;
+import org.branchsim.core.analysis.CylinderMetrics;
 import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.ReducingValveMetrics;
@@ -82,6 +84,36 @@ public final class RunCommand implements Callable<Integer> {
                 + "the setting at %.3f s (inside from %.3f s)", m.settlingTime(), m.riseTime(), m.settledAt());
     }
 
+    /** The cylinders' forces and the cavitation report, one line each, in the scenario's units. */
+    private static void cylinderAndCavitationLines(StringBuilder sb, Scenario s, SimulationResult r) {
+        Unit fu = s.units().displayUnit(Dimension.FORCE);
+        for (CylinderMetrics m : CylinderMetrics.of(r, s.metricsFrom(), s.metricsTo())) {
+            sb.append(String.format(Locale.ROOT, "cylinder %s: force (chamber pressures on the piston areas) peak %.4g %s "
+                            + "at %.3f s, final %.4g %s", m.id(), fu.fromSi(m.force().peak()), fu.symbol(),
+                    m.force().peakTime(), fu.fromSi(m.force().last()), fu.symbol()));
+            if (m.clamp() != null) {
+                sb.append(String.format(Locale.ROOT, "; clamp force on the part (contact force) peak %.4g %s at %.3f s, "
+                                + "final %.4g %s", fu.fromSi(m.clamp().peak()), fu.symbol(), m.clamp().peakTime(),
+                        fu.fromSi(m.clamp().last()), fu.symbol()));
+            }
+            sb.append(System.lineSeparator());
+        }
+        Unit pu = s.units().displayUnit(Dimension.PRESSURE);
+        double threshold = r.model().fluid().releasePressure();
+        List<CavitationFinding> cav = CavitationFinding.of(r);
+        if (cav.isEmpty()) {
+            sb.append(String.format(Locale.ROOT, "cavitation: no node fell below the air-release pressure %.3f %s "
+                    + "(gauge)%n", pu.fromSi(threshold), pu.symbol()));
+        }
+        for (CavitationFinding f : cav) {
+            sb.append(String.format(Locale.ROOT, "cavitation: node %s fell below the air-release pressure %.3f %s (gauge) "
+                            + "at %.4f s, for %.4f s in all, down to %.4g %s absolute at %.4f s; air comes out of "
+                            + "solution there and the result at that node is uncertain%n", f.node(),
+                    pu.fromSi(threshold), pu.symbol(), f.firstTime(), f.duration(),
+                    pu.fromSi(f.minimumAbsolute()) - pu.fromSi(0.0), pu.symbol(), f.minimumTime()));
+        }
+    }
+
     static String summary(Scenario s, SimulationResult r, List<ReducingValveMetrics> valves,
                           List<OscillationFinding> osc) {
         StringBuilder sb = new StringBuilder();
@@ -121,6 +153,7 @@ public final class RunCommand implements Callable<Integer> {
             sb.append("oscillation: ").append(DiagnosisText.describe(f, s.units()))
                     .append(" (try 'branchsim diagnose')").append(nl);
         }
+        cylinderAndCavitationLines(sb, s, r);
         Unit eu = s.units().displayUnit(Dimension.ENERGY);
         sb.append(String.format(Locale.ROOT, "energy: %.4g %s supplied, residual %.3g %% of supplied%n",
                 eu.fromSi(r.energy().total(org.branchsim.core.model.EnergyAccount.Kind.SUPPLY)), eu.symbol(),

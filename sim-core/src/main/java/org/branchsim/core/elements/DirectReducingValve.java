@@ -72,6 +72,18 @@ public final class DirectReducingValve implements Element, ReducingValve {
         this.end = endChamber == null ? null : new SpoolEndChamber.Bound(endChamber, outlet, edge.endArea());
     }
 
+    /**
+     * Sets the spool's coefficient of restitution at its stops (0, the default: it stops dead); part of building the
+     * circuit, before it is bound.
+     *
+     * @param e coefficient of restitution, 0 to 1
+     * @return this valve
+     */
+    public DirectReducingValve withRestitution(double e) {
+        spool.withRestitution(e);
+        return this;
+    }
+
     /** @return the spring preload, N (positive for a valid valve) */
     public double preload() {
         return preload;
@@ -111,7 +123,8 @@ public final class DirectReducingValve implements Element, ReducingValve {
     }
 
     /**
-     * The partials: metering flow dq/d(dp) and dq/dy = -dq/ds; displacement flows A_s per y'; the force's
+     * The partials: metering flow dq/d(dp) and dq/dy = -dq/ds; displacement flows A_s per y' and volumes A_s per y
+     * (outlet without end chamber: +A_s, drain: -A_s); the force's
      * dF/dp_e = A_s, dF/dp_drain = -A_s, dF/dy = -k - dF_flow/ds, dF/dy' = -c, dF/dp_1 = -dF/dp_2 (flow force part)
      * = dF_flow/d(dp).
      */
@@ -121,11 +134,13 @@ public final class DirectReducingValve implements Element, ReducingValve {
         e.flowPartial(inlet, outlet, spool.positionSlot(), -edge.flowOpeningSlope(s, dp, density, transitionConstant));
         double as = edge.endArea();
         if (end == null) {
+            e.volumePartial(outlet, spool.positionSlot(), as);
             e.inflowPartial(outlet, spool.velocitySlot(), -as);
             spool.forcePartial(e, outlet, as);
         } else {
             spool.forcePartial(e, end.pressureSlot(), as);
         }
+        e.volumePartial(drain, spool.positionSlot(), -as);
         e.inflowPartial(drain, spool.velocitySlot(), as);
         spool.forcePartial(e, drain, -as);
         double dFflow = edge.flowForcePressureSlope(s, dp);
@@ -160,10 +175,14 @@ public final class DirectReducingValve implements Element, ReducingValve {
         double displaced = edge.endArea() * ydot;
         e.flow(inlet, outlet, qm);
         if (end == null) {
+            // the spool end's chamber is part of the outlet node: its volume A_s y and its displacement flow
+            e.volume(outlet, edge.endArea() * y);
             e.inflow(outlet, -displaced);
         } else {
             end.evaluate(e, y, ydot, spool.positionSlot(), spool.velocitySlot());
         }
+        // the spring chamber, vented to the drain, gives up A_s y of its volume as the spool closes
+        e.volume(drain, -edge.endArea() * y);
         e.inflow(drain, displaced);
         spool.apply(e, forces(e));
         if (e.partials()) {

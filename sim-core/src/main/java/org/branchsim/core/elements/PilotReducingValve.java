@@ -159,6 +159,20 @@ public final class PilotReducingValve implements Element, ReducingValve {
         return setting;
     }
 
+    /**
+     * Sets the coefficients of restitution of the main spool at its stops and of the pilot poppet at its seat and
+     * stop (0, the default: they stop dead); part of building the circuit, before it is bound.
+     *
+     * @param spoolRestitution the main spool's, 0 to 1
+     * @param pilotRestitution the pilot poppet's, 0 to 1
+     * @return this valve
+     */
+    public PilotReducingValve withRestitution(double spoolRestitution, double pilotRestitution) {
+        spool.withRestitution(spoolRestitution);
+        poppet.withRestitution(pilotRestitution);
+        return this;
+    }
+
     @Override
     public String id() {
         return id;
@@ -207,8 +221,8 @@ public final class PilotReducingValve implements Element, ReducingValve {
     }
 
     /**
-     * Main stage partials: metering flow dq/d(dp) and dq/dy = -dq/ds; the outlet's displacement flow (no end
-     * chamber); the spool force's dF/dp_e = A_s, dF/dp_c = -A_s, dF/dy = -k_s - dF_flow/ds, dF/dy' = -c_s, and the
+     * Main stage partials: metering flow dq/d(dp) and dq/dy = -dq/ds; the outlet's displacement flow and volume
+     * (no end chamber: dV_2/dy = A_s); the spool force's dF/dp_e = A_s, dF/dp_c = -A_s, dF/dy = -k_s - dF_flow/ds, dF/dy' = -c_s, and the
      * flow force's dF_flow/d(dp) on p_1 and -p_2.
      */
     private void mainStagePartials(Evaluation e, double s, double dp) {
@@ -219,6 +233,7 @@ public final class PilotReducingValve implements Element, ReducingValve {
                 -edge.flowOpeningSlope(s, dp, density, edgeTransitionConstant));
         double as = edge.endArea();
         if (end == null) {
+            e.volumePartial(outlet, spool.positionSlot(), as);
             e.inflowPartial(outlet, spool.velocitySlot(), -as);
             spool.forcePartial(e, outlet, as);
         } else {
@@ -305,6 +320,8 @@ public final class PilotReducingValve implements Element, ReducingValve {
         double qp = pilot.flowAt(x, pc - pd, density, seatTransitionConstant);
         e.inflow(outlet, -qo);
         if (end == null) {
+            // the spool end's chamber is part of the outlet node: its volume A_s y and its displacement flow
+            e.volume(outlet, as * y);
             e.inflow(outlet, -as * ydot);
         } else {
             end.evaluate(e, y, ydot, spool.positionSlot(), spool.velocitySlot());

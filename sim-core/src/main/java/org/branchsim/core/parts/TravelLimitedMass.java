@@ -16,13 +16,24 @@ import org.branchsim.core.units.Dimension;
 
 /**
  * A rigid member (spool, poppet, piston) of mass m moving along one axis between a lower and an upper stop:
- * m dv/dt = F, dx/dt = v. Reaching a stop is an event: the member stops dead (plastic impact; its kinetic
- * energy is booked as an impact loss) and is held there until the net force pulls it away, which is a
- * second event. While held its position and velocity do not change. States: {@code <name>.x} (m),
+ * m dv/dt = F, dx/dt = v. Reaching a stop is an event. With the default coefficient of restitution e = 0 the
+ * member stops dead (plastic impact; its kinetic energy is booked as an impact loss) and is held there until the
+ * net force pulls it away, which is a second event. With 0 &lt; e &lt;= 1 it rebounds with -e times its impact
+ * velocity (Newton's experimental law of impact; Goldsmith, Impact, 1960, ch. 1), the lost fraction 1 - e^2 of
+ * its kinetic energy booked as the impact loss; a rebound too small to carry it clear of the stop against the
+ * net force that presses it on (rebound travel (e v)^2 m / (2 |F|) below {@link #CAPTURE_TRAVEL} of its travel)
+ * ends the bouncing: the member is then held, so the bounces never pile up without end. While held its position and velocity do not change. States: {@code <name>.x} (m),
  * {@code <name>.v} (m/s); its mode (free or held, {@link Member.Mode}) is a discrete state of each run, read
  * and set through the run's state views, so the member itself holds nothing of any run.
  */
 public final class TravelLimitedMass implements Member {
+
+    /**
+     * Rebound travel, as a fraction of the member's travel, below which a rebounding member is captured by its
+     * stop (held) instead of bouncing again: 100 times {@link Member#STOP_TOLERANCE}, so a rebound always clears
+     * the slack of the stop events (numerical choice, no source).
+     */
+    public static final double CAPTURE_TRAVEL = 100 * STOP_TOLERANCE;
 
     private final String owner;
     private final String name;
@@ -43,6 +54,7 @@ public final class TravelLimitedMass implements Member {
     private EnergyAccount impact;
     private NetForce netForce;
     private ModeSlot modeSlot;
+    private double restitution;
 
     /**
      * @param owner id of the element it belongs to
@@ -64,6 +76,28 @@ public final class TravelLimitedMass implements Member {
         this.initialPosition = Math.max(lower, Math.min(upper, initialPosition));
         this.lowerStopName = lowerStopName;
         this.upperStopName = upperStopName;
+    }
+
+    /**
+     * Sets the coefficient of restitution at both stops; part of building the circuit, before it is bound.
+     *
+     * @param e coefficient of restitution, 0 (dead stop, the default) to 1 (elastic rebound)
+     * @return this member
+     */
+    public TravelLimitedMass withRestitution(double e) {
+        if (!(e >= 0.0 && e <= 1.0)) {
+            throw new IllegalArgumentException("a coefficient of restitution from 0 to 1, not " + e);
+        }
+        if (modeSlot != null) {
+            throw new IllegalStateException(id() + " is bound already");
+        }
+        this.restitution = e;
+        return this;
+    }
+
+    /** @return the coefficient of restitution at its stops (0 = dead stop) */
+    public double restitution() {
+        return restitution;
     }
 
     /**
@@ -277,16 +311,41 @@ public final class TravelLimitedMass implements Member {
             return upper - lower;
         }
 
+        /**
+         * @return true when a member striking this stop at velocity {@code vel} rebounds: e &gt; 0, it moves into
+         *         the stop, and its rebound clears {@link #CAPTURE_TRAVEL} against the net force pressing it on
+         *         (evaluated on the stop at rest, so velocity-dependent forces do not count)
+         */
+        private boolean rebounds(StateView s, double vel) {
+            if (restitution == 0.0 || (isLower ? vel >= 0.0 : vel <= 0.0)) {
+                return false;
+            }
+            double rebound = restitution * Math.abs(vel);
+            double pressing = isLower ? -netForce.at(s) : netForce.at(s);
+            if (pressing <= 0.0) {
+                return true;
+            }
+            return rebound * rebound * mass / (2.0 * pressing) > CAPTURE_TRAVEL * (upper - lower);
+        }
+
         @Override
         public Response onCrossing(boolean increasing, StateEditor s) {
             Mode held = isLower ? Mode.AT_LOWER_STOP : Mode.AT_UPPER_STOP;
             Mode mode = s.mode(modeSlot);
             if (mode == Mode.FREE && !increasing) {
                 double vel = s.value(v);
-                s.impulse(impact, 0.5 * mass * vel * vel);
-                s.impulse(kinetic, -0.5 * mass * vel * vel);
+                double energy = 0.5 * mass * vel * vel;
                 s.set(x, isLower ? lower : upper);
                 s.set(v, 0.0);
+                if (rebounds(s, vel)) {
+                    double lost = (1.0 - restitution * restitution) * energy;
+                    s.impulse(impact, lost);
+                    s.impulse(kinetic, -lost);
+                    s.set(v, -restitution * vel);
+                    return Response.STATE_CHANGED;
+                }
+                s.impulse(impact, energy);
+                s.impulse(kinetic, -energy);
                 s.setMode(modeSlot, held);
                 return Response.STATE_CHANGED;
             }

@@ -22,6 +22,16 @@ final class CommonFields {
     }
 
     /**
+     * @param where the stops it strikes, e.g. "its seat and lift stop"
+     * @return the coefficient of restitution of a moving member at its stops, 0 (dead stop, the default) to 1
+     */
+    static FieldSpec restitution(String where) {
+        return FieldSpec.number("restitution", 0.0, 1.0, 0.0)
+                .meaning("coefficient of restitution at " + where + ": 0 stops it dead, up to 1 rebounds it with that "
+                        + "fraction of its impact velocity (Newton's law of impact)");
+    }
+
+    /**
      * @param meaning what the opening is, e.g. "fully open"
      * @return the fields {@code diameter} and {@code area}, exactly one of which gives an opening's size
      */

@@ -19,7 +19,8 @@ final class DirectReducingValveType {
                     Tuning.Direction.RAISE, "N/mm", "lbf/in", "a stiffer spool spring of %s (lower gain, more droop)",
                     "a softer spool spring of %s")),
             SpoolBlock.meteringWidth(),
-            SpoolBlock.endOrificeDiameter());
+            SpoolBlock.endOrificeDiameter(),
+            CommonFields.restitution("its open and closed stops"));
 
     static final ElementDescriptor<DirectReducingValve> DESCRIPTOR = ElementDescriptor.of("directReducingValve",
             "direct-acting pressure reducing valve", List.of("inlet", "outlet", "drain"),
@@ -48,6 +49,6 @@ final class DirectReducingValveType {
                     + " bar with this spring)");
             return null;
         }
-        return v;
+        return v.withRestitution(s.si("restitution"));
     }
 }

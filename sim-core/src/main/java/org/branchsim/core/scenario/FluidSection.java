@@ -5,6 +5,7 @@ import org.branchsim.core.fluid.Fluid;
 import org.branchsim.core.fluid.IsoGrade;
 import org.branchsim.core.fluid.ViscosityModel;
 import org.branchsim.core.units.Dimension;
+import org.branchsim.core.units.Units;
 
 /**
  * The {@code fluid} section: temperature, viscosity (an ISO VG grade, a fixed value, or two points of the
@@ -35,14 +36,21 @@ final class FluidSection {
             FieldSpec.number("airContent", 0.0, 0.5, 0.0)
                     .meaning("free air volume fraction at atmospheric pressure, a number or e.g. \"0.5 %\""),
             FieldSpec.choice("airProcess", FieldSpec.word("isothermal"), FieldSpec.word("adiabatic"))
-                    .meaning("how entrained air is compressed (adiabatic: polytropic exponent 1.4)"))
+                    .meaning("how entrained air is compressed (adiabatic: polytropic exponent 1.4)"),
+            FieldSpec.quantity("airReleasePressure", Dimension.PRESSURE).byDefault("-0.7 bar")
+                    .meaning("gauge pressure below which dissolved air comes out of solution (gaseous cavitation); "
+                            + "a run reports every node that falls below it"),
+            FieldSpec.number("releasableAir", 1e-6, 0.5, Fluid.DEFAULT_RELEASABLE_AIR)
+                    .meaning("air that comes out of solution by absolute vacuum, a volume fraction at atmospheric "
+                            + "pressure, a number or e.g. \"1 %\""))
             .with(new Choice(List.of(List.of("grade"), List.of("viscosity"), List.of("viscosity40", "viscosity100")),
                     false, "viscosity", "one way of giving viscosity: \"grade\", \"viscosity\", or \"viscosity40\" with "
                     + "\"viscosity100\"", null, null))
             .with(new Choice(List.of(List.of("density15"), List.of("density")), false, "density",
                     "either \"density15\" (at 15 degC) or \"density\" (at the working temperature)", null, null))
             .with(FluidSection::knownGrade)
-            .with(FluidSection::thinnerWhenHot);
+            .with(FluidSection::thinnerWhenHot)
+            .with(FluidSection::releaseAboveVacuum);
 
     private FluidSection() {
     }
@@ -52,6 +60,13 @@ final class FluidSection {
         if (g != null && r.has("grade") && IsoGrade.parse(g) == null) {
             r.problem("grade", "an ISO VG grade (" + IsoGrade.names() + ")", "\"" + g + "\"");
             r.putText("grade", null);
+        }
+    }
+
+    private static void releaseAboveVacuum(Reading r) {
+        if (r.valid("airReleasePressure")
+                && !(r.si("airReleasePressure") > -Units.ATMOSPHERE && r.si("airReleasePressure") <= 0.0)) {
+            r.refuse("airReleasePressure", "a gauge pressure between -1.013 bar (absolute vacuum) and 0");
         }
     }
 
@@ -79,7 +94,10 @@ final class FluidSection {
         double density = r.has("density") ? r.si("density")
                 : Fluid.densityAt(r.si("density15"), DEFAULT_EXPANSION, temperature);
         double n = "adiabatic".equals(r.text("airProcess")) ? 1.4 : 1.0;
-        return new Fluid(density, nu, r.si("bulkModulus"), r.si("airContent"), n, temperature);
+        double release = r.valid("airReleasePressure") ? r.si("airReleasePressure") : Fluid.DEFAULT_RELEASE_PRESSURE;
+        double releasable = r.valid("releasableAir") ? r.si("releasableAir") : Fluid.DEFAULT_RELEASABLE_AIR;
+        return new Fluid(density, nu, r.si("bulkModulus"), r.si("airContent"), n, temperature,
+                release > -Units.ATMOSPHERE && release <= 0.0 ? release : Fluid.DEFAULT_RELEASE_PRESSURE, releasable);
     }
 
     private static double viscosity(Reading r, double temperature) {

@@ -28,7 +28,8 @@ final class PilotReducingValveType {
             SpoolBlock.endOrificeDiameter().tuning(Tuning.scaled(20, CommonFields.members("end"), Tuning.SIZE_RANGE,
                     Tuning.Direction.LOWER, "mm", "in", "a larger sensing orifice of %s",
                     "a smaller sensing orifice of %s")),
-            FieldSpec.nonNegative("springPreload", Dimension.FORCE).meaning("spool spring force on the open stop"));
+            FieldSpec.nonNegative("springPreload", Dimension.FORCE).meaning("spool spring force on the open stop"),
+            CommonFields.restitution("its open and closed stops"));
 
     private static final BlockSpec DAMPING_ORIFICE = BlockSpec.of("dampingOrifice",
             FieldSpec.positive("diameter", Dimension.LENGTH).meaning("diameter of the damping orifice")
@@ -44,7 +45,8 @@ final class PilotReducingValveType {
             PoppetBlock.springRate().tuning(Tuning.scaled(40, CommonFields.members("pilot"), Tuning.SIZE_RANGE,
                     Tuning.Direction.RAISE, "N/mm", "lbf/in",
                     "a stiffer pilot spring of %s (re-set the valve after fitting it)",
-                    "a softer pilot spring of %s (re-set the valve after fitting it)"))));
+                    "a softer pilot spring of %s (re-set the valve after fitting it)"))))
+            .plus(CommonFields.restitution("its seat and lift stop"));
 
     static final ElementDescriptor<PilotReducingValve> DESCRIPTOR = ElementDescriptor.of("pilotReducingValve",
             "pilot-operated pressure reducing valve", List.of("inlet", "outlet", "drain"),
@@ -105,6 +107,7 @@ final class PilotReducingValveType {
             setting = preload / pilot.seatArea() + main.springBias();
         }
         return new PilotReducingValve(id, ports.get("inlet"), ports.get("outlet"), ports.get("drain"), main, chamber,
-                od, ocd, pilot.withPreload(preload), setting);
+                od, ocd, pilot.withPreload(preload), setting)
+                .withRestitution(s.si("restitution"), r.block("pilot").si("restitution"));
     }
 }

@@ -73,6 +73,24 @@ public final class Reading {
         return fields.problems().count() == problemsBefore;
     }
 
+    /**
+     * Reads a list of blocks (a {@code blockList} field), each checked against its spec; its problems are recorded.
+     *
+     * @param name the field
+     * @param items the spec of one item
+     * @return the items read, in order (empty when the field is left out)
+     */
+    java.util.List<Reading> items(String name, BlockSpec items) {
+        java.util.List<Located> list = fields.list(name);
+        java.util.List<Reading> out = new java.util.ArrayList<>();
+        for (int i = 0; i < list.size(); i++) {
+            Fields item = Fields.of(list.get(i), fields.path(name) + "[" + i + "]", fields.problems());
+            out.add(BlockReader.read(item, items));
+            item.finish();
+        }
+        return out;
+    }
+
     /** @return the value as written, or null when the field is left out */
     public Located raw(String name) {
         return fields.node().get(name);

@@ -51,6 +51,8 @@ class GripperChatterModesTest {
         assertTrue(least.parts().stream().limit(2).anyMatch(p -> p.name().equals("reducer.pilot")),
                 least.name() + " " + least.parts());
         assertTrue(least.name().contains("reducer.pilot"), least.name());
-        assertEquals(least.dampingRatio(), ModeAnalysis.minimumDampingRatio(c, op), 1e-12);
+        // the two paths to the same eigenvalue agree to the eigen-solver's round-off (1e-9: about 1e-7 of this
+        // ratio; the balanced matrix is ill-conditioned enough that 1e-12 held only by chance)
+        assertEquals(least.dampingRatio(), ModeAnalysis.minimumDampingRatio(c, op), 1e-9);
     }
 }
