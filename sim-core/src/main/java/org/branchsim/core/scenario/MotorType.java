@@ -29,8 +29,8 @@ final class MotorType {
             FieldSpec.positive("torque", Dimension.TORQUE).required()
                     .meaning("torque of the weight at the motor shaft with its arm horizontal"),
             FieldSpec.quantity("angle", Dimension.ANGLE).byDefault("0 deg")
-                    .meaning("load angle from its lowest position at the start, positive in the direction a turn "
-                            + "from a to b moves it"),
+                    .meaning("load angle from its lowest position at the start, 0 to 360 deg in the direction a "
+                            + "turn from a to b moves it (340 deg: 20 deg short of the lowest position)"),
             FieldSpec.number("ratio", 1e-3, 1e4, 1.0)
                     .meaning("motor turns per load turn (gear ratio)"));
 
