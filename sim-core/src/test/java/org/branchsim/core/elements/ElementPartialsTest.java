@@ -41,7 +41,7 @@ class ElementPartialsTest {
     /** The demos hold every element type a scenario can name except the orifice, check valve and motor. */
     @ParameterizedTest
     @ValueSource(strings = {"fixture-clamp", "gripper-chatter", "pilot-supply-hunting", "press-two-branches",
-        "regulation-characteristic", "feed-stall"})
+        "regulation-characteristic", "feed-stall", "mobile-arm"})
     void demoElementsAgreeWithCentralDifferences(String demo) {
         CircuitModel model = ScenarioLoader.load(Path.of("..", "scenarios", demo + ".json")).circuit();
         checkRandomStates(model, demo.hashCode(), true);
