@@ -60,6 +60,8 @@ public final class MetricsReport {
             o.put("final", round(u.fromSi(s.last())));
         }
         root.set("reducingValves", reducingValves(valves, units, scenario.metricsFrom(), scenario.metricsTo()));
+        root.set("motors", MotorReport.json(
+                org.branchsim.core.analysis.MotorMetrics.of(result, scenario.metricsFrom(), scenario.metricsTo()), units));
         ArrayNode osc = root.putArray("oscillations");
         for (OscillationFinding f : oscillations) {
             osc.add(DiagnosisJson.finding(f, units));

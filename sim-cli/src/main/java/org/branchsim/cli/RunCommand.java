@@ -146,6 +146,8 @@ public final class RunCommand implements Callable<Integer> {
                     qu.fromSi(m.drainFlow()), qu.symbol(), wu.fromSi(m.drainPower()), wu.symbol(),
                     wu.fromSi(m.meteringPower()), wu.symbol()));
         }
+        sb.append(MotorReport.text(org.branchsim.core.analysis.MotorMetrics.of(r, s.metricsFrom(), s.metricsTo()),
+                s.units()));
         if (osc.isEmpty()) {
             sb.append("oscillation: none in the later half of any interval between schedule changes").append(nl);
         }

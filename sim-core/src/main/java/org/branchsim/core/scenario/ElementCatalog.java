@@ -22,7 +22,8 @@ public final class ElementCatalog {
             MotorType.DESCRIPTOR,
             AccumulatorType.DESCRIPTOR,
             HydraulicLineType.DESCRIPTOR,
-            PilotReliefValveType.DESCRIPTOR));
+            PilotReliefValveType.DESCRIPTOR,
+            CompensatedPumpType.DESCRIPTOR));
 
     private final List<ElementDescriptor<?>> types;
 

@@ -63,6 +63,54 @@ class ElementPartialsTest {
     }
 
     /**
+     * A motor with friction (breakaway, Stribeck fall, tanh through rest) and an overrunning weight, and pumps with
+     * piston and gear ripple.
+     */
+    @Test
+    void motorLoadsAndPumpRippleAgreeWithCentralDifferences() {
+        Node tank = Node.tank("tank", 0.0);
+        Node a = Node.volume("a", 0.2e-3, 1e9, 0.0);
+        Node b = Node.volume("b", 0.1e-3, Double.POSITIVE_INFINITY, 0.0);
+        CircuitModel model = new CircuitBuilder("loads", AIRY_OIL).add(tank).add(a).add(b)
+                .add(new Pump("piston", tank, a, 1e-6, 150.0, 0.95,
+                        new org.branchsim.core.laws.KinematicRipple(
+                                org.branchsim.core.laws.KinematicRipple.Kind.AXIAL_PISTON, 9, 0.0)))
+                .add(new Pump("gear", tank, b, 1e-6, 150.0, 0.95,
+                        new org.branchsim.core.laws.KinematicRipple(
+                                org.branchsim.core.laws.KinematicRipple.Kind.GEAR, 12, Math.toRadians(20.0))))
+                .add(new Motor("motor", a, b, 10e-6 / (2 * Math.PI), 0.01, 0.01, 1e-13, 15.0,
+                        new Motor.Friction(20.0, 35.0, 3.0, 2.0), new Motor.OverrunningLoad(400.0, 0.5, 20.0)))
+                .add(new Orifice("orifice", b, tank, 3e-6, 0.61))
+                .build();
+        checkRandomStates(model, 13, true);
+    }
+
+    /**
+     * The mobile-arm demo holds a compensated pump, which supplies no partials: its block is differenced, so, as for
+     * {@link #elementsWithoutPartialsFallBackToTheirOwnDifferences}, only at spread pressures.
+     */
+    @Test
+    void mobileArmDemoAgreesWithCentralDifferencesAtSpreadPressures() {
+        CircuitModel model = ScenarioLoader.load(Path.of("..", "scenarios", "mobile-arm.json")).circuit();
+        checkRandomStates(model, 23, false);
+    }
+
+    /** The compensated pump supplies no partials: its differenced block agrees with differences of the whole. */
+    @Test
+    void compensatedPumpFallsBackToItsOwnDifferences() {
+        Node tank = Node.tank("tank", 0.0);
+        Node a = Node.volume("a", 0.2e-3, 1e9, 0.0);
+        CompensatedPump.Compensator comp = new CompensatedPump.Compensator(200e5, 6e-3, 50e3, 0.015, 30.0, 0.5e-3,
+                0.8e-3, 2e-3, 0.61);
+        CircuitModel model = new CircuitBuilder("compensated", AIRY_OIL).add(tank).add(a)
+                .add(new CompensatedPump("pump", tank, a, 4e-6, 150.0, 0.95, null, comp,
+                        new CompensatedPump.ControlPiston(16e-3, 10e-3, 5e-6, 1.0, 2000.0, 10e5, 30e5, 0.6e-3)))
+                .add(new Orifice("orifice", a, tank, 3e-6, 0.61))
+                .build();
+        checkRandomStates(model, 17, false);
+    }
+
+    /**
      * An element that supplies no partials has its block estimated by central differences of its own
      * contributions; the assembled Jacobian agrees with differences of the whole right-hand side as well. Only
      * at spread pressures and off the seats: the fallback's step (eps^(1/3) of the state's typical magnitude, about 0.6 Pa at 1 bar

@@ -228,9 +228,9 @@ class ScenarioSchemaTest {
             assertTrue(def != null && def.get("additionalProperties").asBoolean(true) == false, d.type());
         }
         ArrayNode types = (ArrayNode) schema.get("$defs").get("element").get("properties").get("type").get("enum");
-        // the nine element types of the issue, the accumulator, line and pilot-operated relief valve of issue 12,
-        // plus the old name of the metering path
-        assertEquals(13, types.size(), types.toString());
+        // the nine element types of the issue, the accumulator, line, pilot-operated relief valve and
+        // pressure-compensated pump of issue 12, plus the old name of the metering path
+        assertEquals(14, types.size(), types.toString());
         for (NodeKind k : NodeKind.all()) {
             assertTrue(schema.get("$defs").has("node." + k.type()), k.type());
         }
