@@ -43,6 +43,17 @@ public final class ReliefValve implements Element {
         this.member = new TravelLimitedMass(id, "poppet", poppet.mass(), 0.0, poppet.maxLift(), 0.0, "seat", "lift stop");
     }
 
+    /**
+     * Sets the poppet's coefficient of restitution at its seat and lift stop; part of building the circuit.
+     *
+     * @param e 0 (dead stop, the default) to 1 (elastic rebound)
+     * @return this valve
+     */
+    public ReliefValve withRestitution(double e) {
+        member.withRestitution(e);
+        return this;
+    }
+
     /** @return the cracking pressure F0 / A_s, Pa */
     public double setting() {
         return poppet.preload() / poppet.seatArea();

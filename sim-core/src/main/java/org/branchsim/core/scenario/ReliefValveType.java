@@ -23,6 +23,7 @@ final class ReliefValveType {
                     FieldSpec.positive("preload", Dimension.FORCE)
                             .meaning("spring force at zero lift; or give `setting`"))
                     .plus(PoppetBlock.body(DAMPING, PoppetBlock.springRate()))
+                    .plus(CommonFields.restitution("its seat and lift stop"))
                     .with(Choice.exactlyOne("setting", "exactly one of \"setting\" (a pressure) or \"preload\" (a force)",
                             List.of(List.of("setting"), List.of("preload")))),
             ReliefValveType::build);
@@ -34,6 +35,7 @@ final class ReliefValveType {
         PoppetGeometry body = PoppetBlock.read(r);
         double seat = body.seatDiameter();
         double preload = r.has("preload") ? r.si("preload") : r.si("setting") * 0.25 * Math.PI * seat * seat;
-        return new ReliefValve(id, ports.get("inlet"), ports.get("outlet"), body.withPreload(preload));
+        return new ReliefValve(id, ports.get("inlet"), ports.get("outlet"), body.withPreload(preload))
+                .withRestitution(r.si("restitution"));
     }
 }
