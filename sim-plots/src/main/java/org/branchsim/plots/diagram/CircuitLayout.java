@@ -275,7 +275,7 @@ public final class CircuitLayout {
      */
     static boolean flipped(Part p, Set<String> tanks) {
         return switch (p.kind()) {
-            case RELIEF_VALVE -> true;
+            case RELIEF_VALVE, PILOT_RELIEF_VALVE -> true;
             case ORIFICE, DIRECTIONAL_PATH, CHECK_VALVE, LINE ->
                     tanks.contains(p.nodes().get(1)) && !tanks.contains(p.nodes().get(0));
             default -> false;

@@ -67,7 +67,7 @@ final class LayerAssignment {
             }
         }
         for (int i = 0; i < n; i++) {
-            if (pred.get(i).isEmpty() && parts.get(i).kind() != SymbolKind.PUMP) {
+            if (pred.get(i).isEmpty() && !parts.get(i).kind().supply()) {
                 hang(i, parts, up, tanks, layer, succ);
             }
         }
@@ -143,7 +143,7 @@ final class LayerAssignment {
         int[] state = new int[n];
         List<Integer> roots = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            if (parts.get(i).kind() == SymbolKind.PUMP) {
+            if (parts.get(i).kind().supply()) {
                 roots.add(i);
             }
         }

@@ -11,8 +11,12 @@ import java.util.Locale;
 public enum SymbolKind {
     /** Fixed-displacement pump. */
     PUMP("Pump", List.of("inlet", "outlet")),
+    /** Variable-displacement pump with a pressure compensator. */
+    COMPENSATED_PUMP("CompensatedPump", List.of("inlet", "outlet")),
     /** Direct-acting relief valve. */
     RELIEF_VALVE("ReliefValve", List.of("inlet", "outlet")),
+    /** Pilot-operated relief valve (external drain of the pilot stage). */
+    PILOT_RELIEF_VALVE("PilotReliefValve", List.of("inlet", "outlet", "drain")),
     /** Direct-acting pressure reducing valve (external drain). */
     DIRECT_REDUCING_VALVE("DirectReducingValve", List.of("inlet", "outlet", "drain")),
     /** Pilot-operated pressure reducing valve (external drain). */
@@ -30,7 +34,7 @@ public enum SymbolKind {
     /** Gas-loaded accumulator. */
     ACCUMULATOR("Accumulator", List.of("port")),
     /** Hydraulic line (pipe or hose) with its own dynamics. */
-    LINE("Line", List.of("a", "b")),
+    LINE("HydraulicLine", List.of("a", "b")),
     /** An element of a kind without a symbol of its own: a plain envelope. */
     GENERIC("", List.of());
 
@@ -45,6 +49,11 @@ public enum SymbolKind {
     /** @return the port names, in the order the element lists its nodes (empty for {@link #GENERIC}) */
     public List<String> ports() {
         return ports;
+    }
+
+    /** @return whether the symbol is a pump, a source of the layout's layers */
+    public boolean supply() {
+        return this == PUMP || this == COMPENSATED_PUMP;
     }
 
     /** @return whether the symbol is an actuator, drawn in the top row */

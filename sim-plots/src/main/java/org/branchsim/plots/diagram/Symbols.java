@@ -28,8 +28,8 @@ final class Symbols {
     /** @return the ports' ends in the symbol's own frame, in the kind's port order */
     static List<Point> ports(SymbolKind kind, int portCount) {
         return switch (kind) {
-            case PILOT_REDUCING_VALVE -> List.of(new Point(0, PORT_REACH), new Point(0, -PORT_REACH),
-                    new Point(76, 14));
+            case PILOT_REDUCING_VALVE, PILOT_RELIEF_VALVE -> List.of(new Point(0, PORT_REACH),
+                    new Point(0, -PORT_REACH), new Point(76, 14));
             case DIRECT_REDUCING_VALVE -> List.of(new Point(0, PORT_REACH), new Point(0, -PORT_REACH),
                     new Point(46, 14));
             case CYLINDER -> List.of(new Point(-40, PORT_REACH), new Point(40, PORT_REACH));
@@ -50,6 +50,8 @@ final class Symbols {
     static double[] extent(SymbolKind kind) {
         return switch (kind) {
             case PUMP -> new double[] {-34, 20};
+            case COMPENSATED_PUMP -> new double[] {-34, 40};
+            case PILOT_RELIEF_VALVE -> new double[] {-30, 88};
             case MOTOR -> new double[] {-20, 34};
             case RELIEF_VALVE -> new double[] {-30, 40};
             case DIRECT_REDUCING_VALVE -> new double[] {-30, 58};
@@ -64,6 +66,8 @@ final class Symbols {
     static void draw(SymbolKind kind, Pen p, int portCount) {
         switch (kind) {
             case PUMP -> pump(p);
+            case COMPENSATED_PUMP -> compensatedPump(p);
+            case PILOT_RELIEF_VALVE -> pilotRelief(p);
             case MOTOR -> motor(p);
             case RELIEF_VALVE -> relief(p);
             case DIRECT_REDUCING_VALVE -> directReducing(p);
@@ -92,6 +96,37 @@ final class Symbols {
         p.polygon(true, 0, -r, -6.5, -r + 10, 6.5, -r + 10);
         p.line(-r, 0, -34, 0);
         p.line(-29, -4, -25, 4);
+    }
+
+    /**
+     * The pump with the oblique arrow across it (variable displacement) and, on its right, the compensator: a
+     * dashed control line from the outlet to a spring that sets the pressure at which displacement is reduced.
+     */
+    private static void compensatedPump(Pen p) {
+        pump(p);
+        p.arrow(-16, 16, 16, -16);
+        p.line(Stroke.DASHED, 0, -26, 26, -26, 26, -8);
+        p.spring(18, 40, 0);
+    }
+
+    /**
+     * Main stage: normally closed (arrow beside the ports), fixed spring; inlet pressure fed (dashed) under it and
+     * through the damping orifice to its spring chamber, which the pilot stage (a small normally closed relief
+     * valve with an adjustable spring) relieves through the external drain.
+     */
+    private static void pilotRelief(Pen p) {
+        p.box(0, 0, HALF, HALF);
+        stubs(p, HALF);
+        p.arrow(7, HALF - 4, 7, -HALF + 4);
+        p.line(Stroke.DASHED, 0, 24, -26, 24, -26, 0, -HALF, 0);
+        p.spring(HALF, 34, 0);
+        p.line(Stroke.DASHED, 34, 0, 46, 0, 46, -13);
+        p.restriction(46, -5);
+        double py = -22;
+        p.box(46, py, 9, 9);
+        p.arrow(49.5, py + 6, 49.5, py - 6);
+        p.adjustableSpring(55, 68, py);
+        p.line(Stroke.DASHED, 46, py - 9, 46, py - 16, 76, py - 16, 76, 14);
     }
 
     /** Circle, filled triangle at the inlet pointing inwards, output shaft to the right. */

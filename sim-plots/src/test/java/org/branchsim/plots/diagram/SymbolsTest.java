@@ -97,6 +97,8 @@ class SymbolsTest {
         assertTrue(draw(SymbolKind.RELIEF_VALVE).dashed() >= 1);
         assertTrue(draw(SymbolKind.DIRECT_REDUCING_VALVE).dashed() >= 2);
         assertTrue(draw(SymbolKind.PILOT_REDUCING_VALVE).dashed() >= 3);
+        // ISO 1219-1: a pilot-operated relief valve's pilot and drain lines are dashed, as the reducing valve's
+        assertTrue(draw(SymbolKind.PILOT_RELIEF_VALVE).dashed() >= 3);
         assertEquals(0, draw(SymbolKind.PUMP).dashed());
         assertEquals(0, draw(SymbolKind.CYLINDER).dashed());
     }
@@ -124,6 +126,9 @@ class SymbolsTest {
         assertEquals(SymbolKind.PILOT_REDUCING_VALVE, SymbolKind.ofClass("PilotReducingValve"));
         assertEquals(SymbolKind.DIRECTIONAL_PATH, SymbolKind.ofClass("MeteringPath"));
         assertEquals(SymbolKind.ACCUMULATOR, SymbolKind.ofClass("Accumulator"));
+        assertEquals(SymbolKind.LINE, SymbolKind.ofClass("HydraulicLine"));
+        assertEquals(SymbolKind.COMPENSATED_PUMP, SymbolKind.ofClass("CompensatedPump"));
+        assertEquals(SymbolKind.PILOT_RELIEF_VALVE, SymbolKind.ofClass("PilotReliefValve"));
         assertEquals(SymbolKind.GENERIC, SymbolKind.ofClass("SomethingNew"));
     }
 }
