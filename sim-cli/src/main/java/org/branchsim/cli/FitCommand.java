@@ -77,6 +77,11 @@ public final class FitCommand implements Callable<Integer> {
             description = "Levenberg-Marquardt iterations per descent (default: ${DEFAULT-VALUE}).")
     private int iterations;
 
+    @Option(names = "--shift-range", defaultValue = "1 ms", paramLabel = "TIME",
+            description = "Refine the record's time offset within +- TIME as one more free parameter; \"0 s\" keeps "
+                    + "the alignment as found (default: ${DEFAULT-VALUE}).")
+    private String shiftRange;
+
     @Option(names = "--threads", paramLabel = "N", description = "Threads (default: the number of cores).")
     private Integer threads;
 
@@ -97,6 +102,11 @@ public final class FitCommand implements Callable<Integer> {
         List<FreeParameter> params = FreeOption.parse(free, doc);
         measured.files(files);
         List<Measurement> raw = measured.read(s.circuit());
+        double shiftRangeS = time("--shift-range", shiftRange, 0.0);
+        if (!(shiftRangeS >= 0.0) || shiftRangeS > MAX_SHIFT_RANGE) {
+            throw OptionChecks.outOfRange("--shift-range", "a time from 0 s to " + ValueText.format(MAX_SHIFT_RANGE)
+                    + " s", "\"" + shiftRange + "\"");
+        }
         double lo = time("--from", from, 0.0);
         double hi = time("--to", to, s.solver().endTime());
         List<Path> inputs = new ArrayList<>(files);
@@ -124,25 +134,36 @@ public final class FitCommand implements Callable<Integer> {
                 }
                 sigma[c] = Math.max(NoiseEstimate.sigma(x), SIGMA_FLOOR * scale + Double.MIN_NORMAL);
             }
-            TraceResiduals model = new TraceResiduals(s.file(), doc, params, Map.of("solver.endTime",
-                    ValueText.format(Math.min(s.solver().endTime(), wTo + END_MARGIN)) + " s"),
-                    aligned.measurements(), sigma, wFrom, wTo, nThreads);
-            double[] scenarioU = new double[params.size()];
-            for (int k = 0; k < scenarioU.length; k++) {
+            // the model's output grid no coarser than the record's samples: reading the simulation between grid
+            // points is linear interpolation, whose error on a landing that rises 20 bar per ms would otherwise
+            // be many noise deviations
+            double grid = Math.min(s.solver().outputInterval(), finestSpacing(aligned.measurements(), wFrom, wTo));
+            Map<String, Object> fixedValues = new java.util.LinkedHashMap<>();
+            fixedValues.put("solver.endTime", ValueText.format(Math.min(s.solver().endTime(), wTo + END_MARGIN))
+                    + " s");
+            fixedValues.put("solver.outputInterval", ValueText.format(grid) + " s");
+            TraceResiduals model = new TraceResiduals(s.file(), doc, params, fixedValues,
+                    aligned.measurements(), sigma, wFrom, wTo, nThreads, shiftRangeS);
+            double[] scenarioU = new double[model.parameters()];
+            java.util.Arrays.fill(scenarioU, 0.5);
+            for (int k = 0; k < params.size(); k++) {
                 double v = FreeOption.current(params.get(k), doc);
                 scenarioU[k] = Double.isNaN(v) ? 0.5 : Math.max(0, Math.min(1, params.get(k).scaled(v)));
             }
-            List<String> names = params.stream().map(FreeParameter::path).toList();
-            FitResult fit = LeastSquaresFit.fit(model, LeastSquaresFit.starts(params.size(), starts, scenarioU),
+            List<String> names = new ArrayList<>(params.stream().map(FreeParameter::path).toList());
+            if (model.refinesShift()) {
+                names.add(SHIFT_NAME);
+            }
+            FitResult fit = LeastSquaresFit.fit(model, LeastSquaresFit.starts(model.parameters(), starts, scenarioU),
                     descents, iterations, names);
             Located fitted = doc.copy();
             Map<String, Object> values = model.values(fit.optimum());
             for (FreeParameter p : params) {
                 ParameterPath.parse(p.path()).setOrAdd(fitted, values.get(p.path()));
             }
-            String text = report(s, aligned, params, sigma, wFrom, wTo, scenarioU, fit);
+            String text = report(s, aligned, params, sigma, wFrom, wTo, scenarioU, fit, model);
             folder.writeText("fitted.json", LocatedJson.text(fitted));
-            folder.writeText("fit.json", MetricsReport.toJson(json(s, aligned, params, sigma, wFrom, wTo, fit)));
+            folder.writeText("fit.json", MetricsReport.toJson(json(s, aligned, params, sigma, wFrom, wTo, fit, model)));
             folder.writeText("fit.txt", text);
             folder.commit();
             PrintWriter w = spec.commandLine().getOut();
@@ -152,10 +173,29 @@ public final class FitCommand implements Callable<Integer> {
         return BranchsimMain.OK;
     }
 
+    /** Name of the alignment refinement among the fit's parameters. */
+    static final String SHIFT_NAME = "time offset refinement";
+    /** Largest --shift-range, s. */
+    static final double MAX_SHIFT_RANGE = 0.1;
+
     /** Smallest noise standard deviation used, as a fraction of the channel's largest magnitude. */
     static final double SIGMA_FLOOR = 1e-4;
     /** Time simulated beyond the fitted window, s. */
     static final double END_MARGIN = 0.005;
+
+    /** @return the smallest spacing of the measured samples inside the window, s (infinity when none) */
+    static double finestSpacing(List<Measurement> measured, double from, double to) {
+        double finest = Double.POSITIVE_INFINITY;
+        for (Measurement m : measured) {
+            double[] t = m.time();
+            for (int k = 1; k < t.length; k++) {
+                if (t[k] >= from && t[k - 1] <= to && t[k] > t[k - 1]) {
+                    finest = Math.min(finest, t[k] - t[k - 1]);
+                }
+            }
+        }
+        return finest;
+    }
 
     private static double[] window(Measurement m, double from, double to) {
         double[] t = m.time();
@@ -181,7 +221,7 @@ public final class FitCommand implements Callable<Integer> {
     }
 
     private static String report(Scenario s, MeasuredInput.Aligned a, List<FreeParameter> params, double[] sigma,
-                                 double from, double to, double[] scenarioU, FitResult fit) {
+                                 double from, double to, double[] scenarioU, FitResult fit, TraceResiduals model) {
         StringBuilder sb = new StringBuilder();
         sb.append(String.format(Locale.ROOT, "fit of %s: %d residuals from %d channel(s), %s s .. %s s; alignment %s, "
                 + "offset %s s%n", s.name(), fit.observations(), a.measurements().size(), ValueText.format(from),
@@ -196,7 +236,16 @@ public final class FitCommand implements Callable<Integer> {
         sb.append(String.format(Locale.ROOT, "weighted sum of squares: %s at the first start -> %s at the optimum "
                 + "(s^2 = %s with %d degrees of freedom; about 1 when the weights are the noise)%n",
                 ValueText.format(fit.costBefore()), ValueText.format(fit.costAfter()), ValueText.format(fit.variance()),
-                fit.observations() - params.size()));
+                fit.observations() - model.parameters()));
+        if (model.refinesShift()) {
+            int k = params.size();
+            double delta = model.shift(fit.optimum());
+            double half = fit.halfWidth()[k] * 2.0 * model.shiftRange();
+            sb.append(String.format(Locale.ROOT, "alignment refined as a free parameter: the record's offset %s s -> "
+                    + "%s s (+- %s s, 95 %%; searched within +- %s s)%n", ValueText.format(a.offset()),
+                    ValueText.format(a.offset() - delta), Double.isFinite(half) ? ValueText.format(half)
+                    : "undetermined", ValueText.format(model.shiftRange())));
+        }
         sb.append(String.format(Locale.ROOT, "%d model runs, %d Levenberg-Marquardt iterations in the best descent%n",
                 fit.modelRuns(), fit.iterations()));
         sb.append(String.format(Locale.ROOT, "%-46s %12s %12s %14s %22s%n", "parameter", "scenario", "estimate",
@@ -233,13 +282,20 @@ public final class FitCommand implements Callable<Integer> {
     }
 
     private static ObjectNode json(Scenario s, MeasuredInput.Aligned a, List<FreeParameter> params, double[] sigma,
-                                   double from, double to, FitResult fit) {
+                                   double from, double to, FitResult fit, TraceResiduals model) {
         ObjectNode o = MetricsReport.mapper().createObjectNode();
         o.put("scenario", s.name());
         o.put("from_s", from);
         o.put("to_s", to);
         o.put("alignment", a.how());
         o.put("offset_s", a.offset());
+        if (model.refinesShift()) {
+            double delta = model.shift(fit.optimum());
+            o.put("refinedOffset_s", a.offset() - delta);
+            MetricsReport.putFinite(o, "refinedOffsetHalfWidth95_s",
+                    fit.halfWidth()[params.size()] * 2.0 * model.shiftRange());
+            o.put("shiftRange_s", model.shiftRange());
+        }
         o.put("observations", fit.observations());
         o.put("costBefore", fit.costBefore());
         o.put("costAfter", fit.costAfter());
