@@ -79,7 +79,11 @@ public final class CompareCommand implements Callable<Integer> {
         inputs.add(scenario.file());
         try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-compare"),
                 inputs.toArray(Path[]::new))) {
-            SimulationResult r = Simulator.run(s.circuit(), s.solver());
+            // the output grid no coarser than the record's samples: the simulation is read between grid points by
+            // linear interpolation, whose error on a steep landing would count as model error
+            double grid = Math.min(s.solver().outputInterval(),
+                    FitCommand.finestSpacing(raw, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY));
+            SimulationResult r = Simulator.run(s.circuit(), s.solver().withOutputInterval(grid));
             MeasuredInput.Aligned aligned = measured.align(raw, r.trace());
             List<Mode> modes;
             String modesNote;

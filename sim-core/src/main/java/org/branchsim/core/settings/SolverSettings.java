@@ -124,4 +124,10 @@ public record SolverSettings(Method method, double endTime, double outputInterva
         return new SolverSettings(method, t, outputInterval, relativeTolerance, minStep, maxStep, eventTolerance,
                 maxEvaluations);
     }
+
+    /** @return a copy with another output interval, s (the largest step is kept) */
+    public SolverSettings withOutputInterval(double dt) {
+        return new SolverSettings(method, endTime, dt, relativeTolerance, minStep, maxStep, eventTolerance,
+                maxEvaluations);
+    }
 }
