@@ -19,8 +19,6 @@ import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.solve.Simulator;
-import org.branchsim.core.units.Dimension;
-import org.branchsim.core.units.Quantity;
 import org.branchsim.core.units.Unit;
 import org.branchsim.plots.TraceCharts;
 import picocli.CommandLine;
@@ -71,8 +69,8 @@ public final class CompareCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Scenario s = scenario.load();
-        double lo = time("--from", from, Double.NEGATIVE_INFINITY);
-        double hi = time("--to", to, Double.POSITIVE_INFINITY);
+        double lo = OptionChecks.time("--from", from, Double.NEGATIVE_INFINITY);
+        double hi = OptionChecks.time("--to", to, Double.POSITIVE_INFINITY);
         measured.files(files);
         List<Measurement> raw = measured.read(s.circuit());
         List<Path> inputs = new ArrayList<>(measured.files());
@@ -126,17 +124,6 @@ public final class CompareCommand implements Callable<Integer> {
             folder.report(w);
         }
         return BranchsimMain.OK;
-    }
-
-    private static double time(String option, String text, double otherwise) {
-        if (text == null) {
-            return otherwise;
-        }
-        Quantity.Parsed p = Quantity.parse(text, Dimension.TIME);
-        if (!p.ok()) {
-            throw OptionChecks.unreadable(option, "a time with its unit, e.g. \"0.3 s\"", "\"" + text + "\"");
-        }
-        return p.si();
     }
 
     private ObjectNode report(ChannelComparison c, Scenario s, List<Mode> modes, StringBuilder text) {

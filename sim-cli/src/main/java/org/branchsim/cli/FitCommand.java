@@ -22,7 +22,6 @@ import org.branchsim.core.solve.Simulator;
 import org.branchsim.core.study.ParameterPath;
 import org.branchsim.core.study.ValueText;
 import org.branchsim.core.units.Dimension;
-import org.branchsim.core.units.Quantity;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -102,13 +101,13 @@ public final class FitCommand implements Callable<Integer> {
         List<FreeParameter> params = FreeOption.parse(free, doc);
         measured.files(files);
         List<Measurement> raw = measured.read(s.circuit());
-        double shiftRangeS = time("--shift-range", shiftRange, 0.0);
+        double shiftRangeS = OptionChecks.time("--shift-range", shiftRange, 0.0);
         if (!(shiftRangeS >= 0.0) || shiftRangeS > MAX_SHIFT_RANGE) {
             throw OptionChecks.outOfRange("--shift-range", "a time from 0 s to " + ValueText.format(MAX_SHIFT_RANGE)
                     + " s", "\"" + shiftRange + "\"");
         }
-        double lo = time("--from", from, 0.0);
-        double hi = time("--to", to, s.solver().endTime());
+        double lo = OptionChecks.time("--from", from, 0.0);
+        double hi = OptionChecks.time("--to", to, s.solver().endTime());
         List<Path> inputs = new ArrayList<>(files);
         inputs.add(scenario.file());
         try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name() + "-fit"),
@@ -207,17 +206,6 @@ public final class FitCommand implements Callable<Integer> {
             }
         }
         return keep.stream().mapToDouble(Double::doubleValue).toArray();
-    }
-
-    private static double time(String option, String text, double otherwise) {
-        if (text == null) {
-            return otherwise;
-        }
-        Quantity.Parsed p = Quantity.parse(text, Dimension.TIME);
-        if (!p.ok()) {
-            throw OptionChecks.unreadable(option, "a time with its unit, e.g. \"0.3 s\"", "\"" + text + "\"");
-        }
-        return p.si();
     }
 
     private static String report(Scenario s, MeasuredInput.Aligned a, List<FreeParameter> params, double[] sigma,

@@ -2,6 +2,8 @@ package org.branchsim.cli;
 
 import org.branchsim.core.error.BranchsimException;
 import org.branchsim.core.error.ErrorKey;
+import org.branchsim.core.units.Dimension;
+import org.branchsim.core.units.Quantity;
 
 /**
  * Limits of command-line options shared by the commands, checked before any run. Every refusal names the
@@ -49,5 +51,23 @@ final class OptionChecks {
     /** @return the refusal of an option that names one thing twice: "OPTION: expected each WHAT once, found ..." */
     static BranchsimException repeated(String option, String what, String found) {
         return new BranchsimException(ErrorKey.OPTION_REPEATED, option, what, found);
+    }
+
+    /**
+     * @param option the option's name, for the refusal
+     * @param text the option's text, e.g. "0.3 s" (null when not given)
+     * @param otherwise the value when the option is not given, s
+     * @return the time, s
+     * @throws BranchsimException OPTION_UNREADABLE when the text is not a time with its unit
+     */
+    static double time(String option, String text, double otherwise) {
+        if (text == null) {
+            return otherwise;
+        }
+        Quantity.Parsed p = Quantity.parse(text, Dimension.TIME);
+        if (!p.ok()) {
+            throw unreadable(option, "a time with its unit, e.g. \"0.3 s\"", "\"" + text + "\"");
+        }
+        return p.si();
     }
 }
