@@ -38,7 +38,7 @@ import picocli.CommandLine.Parameters;
  */
 @Command(name = "fit", mixinStandardHelpOptions = true,
         description = {"Estimate free parameters from measured traces by weighted least squares "
-                + "(Levenberg-Marquardt): values with approximate 95 % confidence intervals, correlations, residual "
+                + "(Levenberg-Marquardt): values with approximate 95 %% confidence intervals, correlations, residual "
                 + "before and after, identifiability; writes the fitted scenario."})
 public final class FitCommand implements Callable<Integer> {
 

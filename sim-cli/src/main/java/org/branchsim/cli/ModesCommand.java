@@ -40,7 +40,7 @@ import picocli.CommandLine.Option;
         description = {"Find the circuit's operating point at a time, linearise about it and list its modes: "
                 + "natural frequency, damping ratio, verdict (UNSTABLE with its growth rate, LOW below the "
                 + "damping-ratio margin) and the parts that take part most.",
-            "The Newton solve starts from the mean of each state over the last 10 % of the run to TIME "
+            "The Newton solve starts from the mean of each state over the last 10 %% of the run to TIME "
                 + "(at least the last 20 ms)."})
 public final class ModesCommand implements Callable<Integer> {
 

@@ -8,7 +8,8 @@ import org.branchsim.core.model.StateView;
 import org.hipparchus.ode.events.AdaptableInterval;
 
 /**
- * How often each discontinuity's switching function is checked inside a step: a member's seat and stop
+ * How often each discontinuity's switching function is checked inside a step of the explicit methods (the
+ * implicit ones use {@link StepCheckTimes}): a member's seat and stop
  * events every fifth of the member's natural period 2 pi sqrt(m/k) (k its stiffness at the start of the run),
  * so that a member crossing a stop and coming back within one step is still seen; everything else, and a
  * member without a restoring stiffness, at most every longest step (in practice at step ends). Times in s.

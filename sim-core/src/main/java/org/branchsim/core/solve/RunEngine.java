@@ -34,6 +34,7 @@ final class RunEngine {
     private final Evaluation editWork;
     private final Map<StateSlot, Integer> positions;
     private JacobianWorkspace jacobianWork;
+    private RecentPowers recentPowers;
     private long evaluations;
 
     /** @param model the model to run; every member starts free, the impulse ledger empty */
@@ -78,7 +79,34 @@ final class RunEngine {
      */
     void derivatives(double t, double[] y, double[] yDot) {
         evaluations++;
-        model.evaluate(work, t, y, yDot, null, null);
+        model.evaluate(work, t, y, yDot, null, recentPowers == null ? null : recentPowers.next(t, y));
+    }
+
+    /**
+     * From now on remembers the energy accounts' powers of the latest derivative evaluations (see
+     * {@link #powersAt}); costs a copy of the state per evaluation.
+     */
+    void rememberPowers() {
+        if (recentPowers == null) {
+            double[] scale = new double[model.dimension()];
+            List<StateSlot> slots = model.states();
+            for (int i = 0; i < scale.length; i++) {
+                scale[i] = slots.get(i).absoluteScale();
+            }
+            recentPowers = new RecentPowers(scale.length, model.accounts().size(), scale);
+        }
+    }
+
+    /**
+     * The power flowing into each energy account at (t, y), W, in the model's account order: taken from a
+     * remembered derivative evaluation at that instant and state when there is one (no new evaluation),
+     * otherwise evaluated (and counted).
+     *
+     * @param timeTolerance largest time difference still taken as the same instant, s
+     */
+    double[] powersAt(double t, double[] y, double timeTolerance) {
+        double[] found = recentPowers == null ? null : recentPowers.find(t, y, timeTolerance);
+        return found != null ? found : samplePowers(t, y);
     }
 
     /**

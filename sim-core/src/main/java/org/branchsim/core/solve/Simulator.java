@@ -34,11 +34,12 @@ import org.hipparchus.exception.LocalizedCoreFormats;
 /**
  * Runs a circuit model in time with Hipparchus: the only place that knows the integrator. Each run has its own
  * engine (member modes, impulse ledger, work buffers), so the model is only read and one model may be run many
- * times, on many threads at once. Registers every discontinuity as an event detector (a member's seats and stops
- * checked inside steps at a fifth of its natural period), or, for the implicit methods, hands the ones at known
- * times (schedule corners) to the integrator to land on; samples the output grid from the dense output,
- * integrates the energy accounts, and turns solver failures into
- * {@link BranchsimException}s naming the time and the states.
+ * times, on many threads at once. Registers every discontinuity as an event detector, checked inside the implicit
+ * methods' steps where its switching function has an extremum along the dense output ({@link StepCheckTimes}) and
+ * inside the explicit methods' steps at a fifth of a member's natural period ({@link CheckIntervals}); the
+ * implicit methods land on the ones at known times (schedule corners) instead. Samples the output grid from the
+ * dense output, integrates the energy accounts, and turns solver failures into {@link BranchsimException}s naming
+ * the time and the states.
  */
 public final class Simulator {
 
@@ -75,17 +76,24 @@ public final class Simulator {
         integrator.setMaxEvaluations((int) Math.min(Integer.MAX_VALUE, settings.maxEvaluations()));
 
         SharedView views = new SharedView(engine);
+        boolean implicit = integrator instanceof RosenbrockIntegrator;
         CheckIntervals intervals = new CheckIntervals(engine, settings.maxStep(), y0);
-        KnownTimes known = integrator instanceof RosenbrockIntegrator ? new KnownTimes(log) : null;
+        StepCheckTimes checkTimes = new StepCheckTimes();
+        KnownTimes known = implicit ? new KnownTimes(log) : null;
         for (Discontinuity d : model.discontinuities()) {
             if (known != null && known.accepts(d)) {
                 continue;
             }
-            integrator.addEventDetector(new DiscontinuityDetector(engine, views, d, log, intervals.of(d), 200,
-                    new BracketingNthOrderBrentSolver(0.0, settings.eventTolerance(), 0.0, 5)));
+            DiscontinuityDetector detector = new DiscontinuityDetector(engine, views, d, log,
+                    implicit ? checkTimes : intervals.of(d), 200,
+                    new BracketingNthOrderBrentSolver(0.0, settings.eventTolerance(), 0.0, 5));
+            checkTimes.watch(detector::g);
+            integrator.addEventDetector(detector);
         }
-        if (known != null) {
-            ((RosenbrockIntegrator) integrator).setKnownTimes(known.times(), known::landed);
+        if (implicit) {
+            RosenbrockIntegrator rosenbrock = (RosenbrockIntegrator) integrator;
+            rosenbrock.setKnownTimes(known.times(), known::landed);
+            rosenbrock.setStepListener(checkTimes::inspect);
         }
         GridSampler sampler = new GridSampler(engine, trace, settings.outputInterval(), settings.endTime(), reporter);
         EnergyQuadrature quadrature = new EnergyQuadrature(engine);

@@ -17,7 +17,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * On the fixture-clamp demo: the implicit method lands on every schedule corner exactly and logs it as the
- * event search did; a member's stop events are checked every fifth of its natural period.
+ * event search did; with the explicit methods a member's stop events are checked every fifth of its natural
+ * period (the implicit methods check at extrema along the step: {@link StepCheckTimesTest}).
  */
 class KnownTimesAndCheckIntervalsTest {
 

@@ -9,6 +9,7 @@ import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.nonstiff.AdaptiveStepsizeIntegrator;
 import org.hipparchus.ode.sampling.AbstractODEStateInterpolator;
+import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.util.FastMath;
 
 /**
@@ -57,6 +58,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     private java.util.function.DoublePredicate timeDependent = t -> true;
     private JacobianSource jacobianSource;
     private StepMatrixSolver linearSolver;
+    private java.util.function.Consumer<ODEStateInterpolator> stepListener = step -> { };
     private long accepted;
     private long rejected;
     private long jacobians;
@@ -146,6 +148,14 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
      */
     public void setJacobianSource(JacobianSource source) {
         this.jacobianSource = source;
+    }
+
+    /**
+     * Tells {@code listener} of every accepted step's dense output before the step's events are searched on it
+     * (e.g. to choose where switching functions are checked inside the step). Null removes the listener.
+     */
+    public void setStepListener(java.util.function.Consumer<ODEStateInterpolator> listener) {
+        this.stepListener = listener == null ? step -> { } : listener;
     }
 
     /**
@@ -286,7 +296,9 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
             accepted++;
             jacobianAge++;
             jacobianFresh = false;
-            setStepStart(acceptStep(interpolator(start, end, u, mapper), finalTime));
+            AbstractODEStateInterpolator dense = interpolator(start, end, u, mapper);
+            stepListener.accept(dense);
+            setStepStart(acceptStep(dense, finalTime));
             boolean reset = resetOccurred();
             if (reset) {
                 jacobianAge = Integer.MAX_VALUE;
