@@ -28,13 +28,15 @@ public final class FigureSet {
 
     /**
      * Writes the figures into the folder: the standard ones, each plot group, and the landing of each reducing
-     * valve ({@code landing-<id>.png}).
+     * valve ({@code landing-<id>.png}); drawn side by side on the machine's cores.
      */
     public static void write(Scenario scenario, Trace trace, List<ReducingValveMetrics> valves, OutputFolder out) {
+        List<OutputFolder.Pending> figures = new ArrayList<>();
         for (ReducingValveMetrics m : valves) {
             if (trace.indexOf(m.id() + ".p.out") >= 0) {
-                out.write("landing-" + slug(m.id()) + ".png", p -> LandingChart.save(trace, m,
-                        scenario.name() + ": landing of reducing valve " + m.id(), scenario.units(), p));
+                figures.add(new OutputFolder.Pending("landing-" + slug(m.id()) + ".png",
+                        p -> LandingChart.save(trace, m, scenario.name() + ": landing of reducing valve " + m.id(),
+                                scenario.units(), p)));
             }
         }
         List<SignalPanels.Drawn> pressures = SignalPanels.distinct(trace,
@@ -46,16 +48,16 @@ public final class FigureSet {
         String name = scenario.name();
         double fitFrom = scenario.metricsFrom();
         if (!pressures.isEmpty()) {
-            out.write("pressures.png", p -> TraceCharts.panels(trace, SignalPanels.limited(pressures),
-                    name + ": pressures", scenario.units(), fitFrom, p));
+            figures.add(new OutputFolder.Pending("pressures.png", p -> TraceCharts.panels(trace,
+                    SignalPanels.limited(pressures), name + ": pressures", scenario.units(), fitFrom, p)));
         }
         if (!flows.isEmpty()) {
-            out.write("flows.png", p -> TraceCharts.panels(trace, SignalPanels.bySize(trace, flows, fitFrom),
-                    name + ": flows", scenario.units(), fitFrom, p));
+            figures.add(new OutputFolder.Pending("flows.png", p -> TraceCharts.panels(trace,
+                    SignalPanels.bySize(trace, flows, fitFrom), name + ": flows", scenario.units(), fitFrom, p)));
         }
         if (!positions.isEmpty()) {
-            out.write("positions.png", p -> TraceCharts.panels(trace, SignalPanels.single(positions),
-                    name + ": positions", scenario.units(), fitFrom, p));
+            figures.add(new OutputFolder.Pending("positions.png", p -> TraceCharts.panels(trace,
+                    SignalPanels.single(positions), name + ": positions", scenario.units(), fitFrom, p)));
         }
         int k = 1;
         for (Scenario.PlotGroup g : scenario.plots()) {
@@ -69,8 +71,10 @@ public final class FigureSet {
             List<List<SignalPanels.Drawn>> panels = !oneDimension ? SignalPanels.single(drawn)
                     : dims.get(0) == Dimension.VOLUME_FLOW ? SignalPanels.bySize(trace, drawn, fitFrom)
                     : SignalPanels.limited(drawn);
-            out.write(file, p -> TraceCharts.panels(trace, panels, g.title(), scenario.units(), fitFrom, p));
+            figures.add(new OutputFolder.Pending(file,
+                    p -> TraceCharts.panels(trace, panels, g.title(), scenario.units(), fitFrom, p)));
         }
+        out.writeAll(figures);
     }
 
     /** Cycles shown in an oscillation figure. */

@@ -17,6 +17,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
@@ -46,6 +50,10 @@ public final class OutputFolder implements AutoCloseable {
     public interface Content {
         /** Writes to {@code target}. */
         void writeTo(Path target) throws IOException;
+    }
+
+    /** One file to write: its plain name and its content. */
+    public record Pending(String name, Content content) {
     }
 
     /** Name of the file that marks a folder as written by branchsim (so that replacing it loses nothing). */
@@ -152,6 +160,63 @@ public final class OutputFolder implements AutoCloseable {
             }
         }
         return dir.resolve(name);
+    }
+
+    /**
+     * Writes several files at once, on up to one thread per processor (figures are drawn independently of each
+     * other), and returns when all are written; they are listed in the order given. When any fails, the others
+     * still finish and the first failure in that order is thrown.
+     *
+     * @param files the files, each as for {@link #write}
+     */
+    public void writeAll(List<Pending> files) {
+        int threads = Math.min(files.size(), Runtime.getRuntime().availableProcessors());
+        if (threads <= 1) {
+            for (Pending f : files) {
+                write(f.name(), f.content());
+            }
+            return;
+        }
+        synchronized (this) {
+            requireOpen();
+            for (Pending f : files) {
+                if (!names.contains(f.name())) {
+                    names.add(f.name());
+                }
+            }
+        }
+        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "branchsim-output-writer");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            List<Future<Path>> done = new ArrayList<>();
+            for (Pending f : files) {
+                done.add(pool.submit(() -> write(f.name(), f.content())));
+            }
+            RuntimeException first = null;
+            for (int k = 0; k < done.size(); k++) {
+                try {
+                    done.get(k).get();
+                } catch (ExecutionException e) {
+                    synchronized (this) {
+                        names.remove(files.get(k).name());
+                    }
+                    if (first == null) {
+                        first = e.getCause() instanceof RuntimeException r ? r : new IllegalStateException(e.getCause());
+                    }
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    throw new BranchsimException(ErrorKey.OUTPUT_FAILED, dir, "interrupted while writing figures");
+                }
+            }
+            if (first != null) {
+                throw first;
+            }
+        } finally {
+            pool.shutdownNow();
+        }
     }
 
     /**

@@ -162,8 +162,8 @@ final class ReportPage {
      */
     static CircuitDiagram circuit(Scenario s, OutputFolder folder) {
         CircuitDiagram d = CircuitDiagram.of(s.circuit(), s.name() + ": circuit").describedAs(s.description());
-        folder.write(CIRCUIT_SVG, d::writeSvg);
-        folder.write(CIRCUIT_PNG, d::writePng);
+        folder.writeAll(List.of(new OutputFolder.Pending(CIRCUIT_SVG, d::writeSvg),
+                new OutputFolder.Pending(CIRCUIT_PNG, d::writePng)));
         return d;
     }
 

@@ -151,4 +151,30 @@ class OutputFolderTest {
             assertEquals(Set.of("result"), names(dir));
         }
     }
+
+    @Test
+    void filesWrittenSideBySideAreListedInTheOrderGivenAndAFailureLeavesOnlyItsFile(@TempDir Path dir)
+            throws IOException {
+        Path target = dir.resolve("result");
+        try (OutputFolder f = new OutputFolder(target)) {
+            List<OutputFolder.Pending> files = new ArrayList<>();
+            for (String name : List.of("pressures.png", "flows.png", "positions.png", "landing-a.png")) {
+                files.add(new OutputFolder.Pending(name, p -> Files.writeString(p, name)));
+            }
+            files.add(2, new OutputFolder.Pending("broken.png", p -> {
+                Files.writeString(p, "half");
+                throw new IOException("disk full");
+            }));
+            BranchsimException e = assertThrows(BranchsimException.class, () -> f.writeAll(files));
+            assertEquals(ErrorKey.OUTPUT_FAILED, e.key());
+            assertTrue(e.getMessage().contains("broken.png") && e.getMessage().contains("disk full"), e.getMessage());
+            // the others were written all the same, in the order given; the failed one is neither listed nor kept
+            assertEquals(List.of("pressures.png", "flows.png", "positions.png", "landing-a.png"),
+                    f.written().stream().map(p -> p.getFileName().toString()).toList());
+            f.commit();
+        }
+        assertEquals(Set.of("pressures.png", "flows.png", "positions.png", "landing-a.png", OutputFolder.MARKER),
+                names(target));
+        assertEquals("flows.png", Files.readString(target.resolve("flows.png")));
+    }
 }

@@ -2,10 +2,12 @@ package org.branchsim.core.units;
 
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.regex.Pattern;
 
 /**
  * The table of unit symbols branchsim accepts. Factors are exact where NIST SP 811 (2008), Appendix B,
@@ -47,6 +49,12 @@ public final class Units {
     private static final List<Entry> TABLE = new ArrayList<>();
     private static final Map<String, Unit> BY_SYMBOL = new LinkedHashMap<>();
     private static final Map<String, Unit> BY_SYMBOL_ANY_CASE = new LinkedHashMap<>();
+    /** Patterns of {@link #normalise}, compiled once (before the table is indexed). */
+    private static final Pattern DEGREE_SPACE = Pattern.compile("^(?i)(deg|\u00b0)\\s+([cf])$");
+    private static final Pattern SPACED_TIMES = Pattern.compile("\\s*\\*\\s*");
+    private static final Pattern SPACED_SLASH = Pattern.compile("\\s*/\\s*");
+    private static final Pattern SPACES = Pattern.compile("\\s+");
+    private static final Pattern BARE_POWER = Pattern.compile("([A-Za-z])([23])(?![0-9])");
 
     static {
         Dimension d = Dimension.PRESSURE;
@@ -230,14 +238,19 @@ public final class Units {
                 }
             }
         }
+        // every spelling by its case-folded form (the keys of BY_SYMBOL are normalised already)
+        Map<String, List<Map.Entry<String, Unit>>> byFolded = new HashMap<>();
+        for (Map.Entry<String, Unit> other : BY_SYMBOL.entrySet()) {
+            byFolded.computeIfAbsent(other.getKey().toLowerCase(Locale.ROOT), k -> new ArrayList<>()).add(other);
+        }
         for (Entry e : TABLE) {
             if (!e.anyCase()) {
                 continue;
             }
             for (String s : e.spellings()) {
                 String folded = fold(s);
-                for (Map.Entry<String, Unit> other : BY_SYMBOL.entrySet()) {
-                    if (fold(other.getKey()).equals(folded) && !other.getValue().equals(e.unit())) {
+                for (Map.Entry<String, Unit> other : byFolded.getOrDefault(folded, List.of())) {
+                    if (!other.getValue().equals(e.unit())) {
                         throw new IllegalStateException("any-case spelling " + s + " clashes with " + other.getKey());
                     }
                 }
@@ -257,13 +270,12 @@ public final class Units {
     static String normalise(String symbol) {
         String s = symbol.trim()
                 .replace('\u00b7', '*').replace('\u22c5', '*')
-                .replace("\u00b2", "^2").replace("\u00b3", "^3")
-                .replaceAll("^(?i)(deg|\u00b0)\\s+([cf])$", "$1$2")
-                .replaceAll("\\s*\\*\\s*", "*")
-                .replaceAll("\\s*/\\s*", "/")
-                .replaceAll("\\s+", "*")
-                .replaceAll("([A-Za-z])([23])(?![0-9])", "$1^$2");
-        return s;
+                .replace("\u00b2", "^2").replace("\u00b3", "^3");
+        s = DEGREE_SPACE.matcher(s).replaceAll("$1$2");
+        s = SPACED_TIMES.matcher(s).replaceAll("*");
+        s = SPACED_SLASH.matcher(s).replaceAll("/");
+        s = SPACES.matcher(s).replaceAll("*");
+        return BARE_POWER.matcher(s).replaceAll("$1^$2");
     }
 
     /**
