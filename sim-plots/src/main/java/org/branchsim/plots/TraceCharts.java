@@ -71,8 +71,11 @@ public final class TraceCharts {
     static void style(XYLineAndShapeRenderer renderer, int index, int k, float width) {
         renderer.setSeriesPaint(index, colour(k));
         float[] dash = DASHES[(index + k / PALETTE.length) % DASHES.length];
-        renderer.setSeriesStroke(index, dash == null ? new BasicStroke(width)
-                : new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, dash, 0f));
+        renderer.setSeriesStroke(index, dash == null ? new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND)
+                : new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f));
+        // one stroked path per series instead of one per segment: several times faster to draw, and dashes run on
+        // along the curve instead of restarting at every sample
+        renderer.setDrawSeriesLineAsPath(true);
     }
 
     /** White background, light grid. */
