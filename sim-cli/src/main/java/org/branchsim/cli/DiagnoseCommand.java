@@ -14,6 +14,7 @@ import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.study.Diagnosis;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Quantity;
+import org.branchsim.plots.CycleChart;
 import org.branchsim.plots.TraceCharts;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -92,17 +93,35 @@ public final class DiagnoseCommand implements Callable<Integer> {
         return BranchsimMain.OK;
     }
 
-    /** Before/after figures of one finding: the whole interval, and a zoom on its last few cycles. */
+    /**
+     * Before/after figures of one finding: the whole interval, and a zoom on its last few cycles drawn from samples
+     * that resolve the waveform ({@link WaveformRun}: a re-run on a finer grid when the run's is too coarse), with
+     * each run's seat and stop impacts marked and the sample spacing stated.
+     */
     private static void figures(OutputFolder folder, Scenario s, Diagnosis.Report r, Diagnosis.FindingDiagnosis d,
                                 int k) {
         OscillationFinding f = d.finding();
+        ScanWindow w = f.window();
+        double zoomFrom = Math.max(w.changeEnd(), w.to() - ZOOM_CYCLES / f.frequency());
         List<TraceCharts.Labelled> runs = new ArrayList<>();
+        List<CycleChart.Run> zoomed = new ArrayList<>();
+        List<WaveformRun> fine = new ArrayList<>();
         runs.add(new TraceCharts.Labelled("as is", r.baseline().trace()));
+        fine.add(WaveformRun.of(r.baseline(), f.frequency(), w.to()));
         Diagnosis.Trial best = d.recommended();
         if (best != null) {
             runs.add(new TraceCharts.Labelled("with " + best.value() + " (" + best.linear().knob().path() + ")",
                     best.outcome().result().trace()));
+            fine.add(WaveformRun.of(best.outcome().result(), f.frequency(), w.to()));
         }
+        for (int i = 0; i < runs.size(); i++) {
+            String label = runs.get(i).label();
+            WaveformRun run = fine.get(i);
+            zoomed.add(new CycleChart.Run(new TraceCharts.Labelled(label, run.trace()), run.impacts(zoomFrom, w.to()),
+                    run.impactLabel(label, zoomFrom, w.to())));
+        }
+        String sampling = fine.stream().map(WaveformRun::sampling).distinct()
+                .reduce((a, b) -> "as is: " + a + "; after: " + b).orElseThrow();
         List<String> signals = new ArrayList<>();
         signals.add(f.dominant().signal());
         ReducingValve.firstOutletSignal(r.baseline().model()).ifPresent(o -> {
@@ -110,17 +129,14 @@ public final class DiagnoseCommand implements Callable<Integer> {
                 signals.add(o);
             }
         });
-        ScanWindow w = f.window();
-        double zoomFrom = Math.max(w.changeEnd(), w.to() - ZOOM_CYCLES / f.frequency());
         for (String signal : signals) {
             String slug = FigureSet.slug(signal);
             String title = String.format(Locale.ROOT, "%s, finding %d (%s at %.1f Hz): before and after", s.name(), k,
                     f.kind().label(), f.frequency());
             folder.write("finding" + k + "-" + slug + "-interval.png",
                     p -> TraceCharts.compare(runs, signal, title, s.units(), p, w.changeEnd(), w.to()));
-            folder.write("finding" + k + "-" + slug + "-cycles.png",
-                    p -> TraceCharts.compare(runs, signal, title + ", last " + ZOOM_CYCLES + " cycles", s.units(), p,
-                            zoomFrom, w.to()));
+            folder.write("finding" + k + "-" + slug + "-cycles.png", new CycleChart.Figure(zoomed, signal,
+                    title + ", last " + ZOOM_CYCLES + " cycles", sampling, s.units(), zoomFrom, w.to())::save);
         }
     }
 

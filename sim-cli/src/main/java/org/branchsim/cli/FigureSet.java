@@ -8,6 +8,7 @@ import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.units.Dimension;
+import org.branchsim.plots.CycleChart;
 import org.branchsim.plots.LandingChart;
 import org.branchsim.plots.SignalPanels;
 import org.branchsim.plots.TraceCharts;
@@ -83,22 +84,37 @@ public final class FigureSet {
     /**
      * Writes one figure per oscillation found ({@code oscillation-<k>-<signal>.png}): its strongest signal over the
      * last {@link #OSCILLATION_CYCLES} cycles of the window where it is strongest, so that the waveform (and, for
-     * chatter, the flat stretches where a member sits on its seat) can be seen.
+     * chatter, the flat stretches where a member sits on its seat) can be seen. When the run's output grid is too
+     * coarse for that, the scenario is run again to the window's end on a finer one ({@link WaveformRun}) and its
+     * seat and stop impacts are marked; the subtitle says the sample spacing drawn.
      */
     public static void writeOscillations(Scenario scenario, Trace trace, List<OscillationFinding> findings,
                                          OutputFolder out) {
         int k = 0;
         for (OscillationFinding f : findings) {
             k++;
-            String signal = f.dominant().signal();
-            double to = f.window().to();
-            double from = Math.max(f.window().from(), to - OSCILLATION_CYCLES / f.frequency());
-            String title = String.format(Locale.ROOT, "%s: %s of %s at %.1f Hz, last %d cycles before %.3f s",
-                    scenario.name(), f.kind().label(), f.name(), f.frequency(), OSCILLATION_CYCLES, to);
-            out.write(String.format(Locale.ROOT, "oscillation-%d-%s.png", k, slug(signal)),
-                    p -> TraceCharts.compare(List.of(new TraceCharts.Labelled("as run", trace)), signal, title,
-                            scenario.units(), p, from, to));
+            CycleChart.Figure figure = oscillationFigure(scenario, trace, f);
+            out.write(String.format(Locale.ROOT, "oscillation-%d-%s.png", k, slug(f.dominant().signal())),
+                    figure::save);
         }
+    }
+
+    /**
+     * @param scenario the scenario that was run
+     * @param trace its samples
+     * @param f an oscillation found in them
+     * @return the figure of its last {@link #OSCILLATION_CYCLES} cycles, from samples that resolve its waveform
+     */
+    static CycleChart.Figure oscillationFigure(Scenario scenario, Trace trace, OscillationFinding f) {
+        String signal = f.dominant().signal();
+        double to = f.window().to();
+        double from = Math.max(f.window().from(), to - OSCILLATION_CYCLES / f.frequency());
+        String title = String.format(Locale.ROOT, "%s: %s of %s at %.1f Hz, last %d cycles before %.3f s",
+                scenario.name(), f.kind().label(), f.name(), f.frequency(), OSCILLATION_CYCLES, to);
+        WaveformRun w = WaveformRun.of(scenario.circuit(), scenario.solver(), trace, null, f.frequency(), to);
+        List<CycleChart.Run> runs = List.of(new CycleChart.Run(new TraceCharts.Labelled("as run", w.trace()),
+                w.impacts(from, to), w.impactLabel("as run", from, to)));
+        return new CycleChart.Figure(runs, signal, title, w.sampling(), scenario.units(), from, to);
     }
 
     /** Longest slug: with its prefix ("plot-12-", "overlay-", "histogram-") and ".png" a name stays within 60. */

@@ -114,7 +114,8 @@ final class ReportPage {
 
     /**
      * The page of a sweep or tolerance study, from what an unsharded study and a merge of its shards both have (so
-     * that their folders stay equal byte for byte): the study's definition, its table (a CSV it wrote), its figures,
+     * that their folders stay equal byte for byte): the study's definition, its table (a CSV it wrote), its figures
+     * (a landing overlay right after the full overlay of its signal, with a sentence on how its window is chosen),
      * and the circuit diagram with the scenario's description as circuit.svg holds them.
      */
     static void study(StudyDefinition study, String tableFile, OutputFolder folder) {
@@ -138,6 +139,14 @@ final class ReportPage {
                     pg.paragraph("The first " + shown + " of " + (rows.size() - 1) + " rows; all are in " + tableFile
                             + ".");
                 }
+            }
+            if (folder.written().stream().map(f -> f.getFileName().toString())
+                    .anyMatch(n -> n.startsWith("overlay-") && n.endsWith("-landing.png"))) {
+                pg.paragraph(String.format(Locale.ROOT, "Each overlay-<signal>-landing.png follows its full "
+                        + "overlay: the same curves zoomed on the landing, from before the earliest variant's rise "
+                        + "through %.0f %% of its setting to after the latest one settles into +-%.0f %% of it, each "
+                        + "variant's peak marked by a triangle in its colour.",
+                        100 * ReducingValveMetrics.RISE_FRACTION, 100 * ReducingValveMetrics.BAND));
             }
             figures(pg, folder.written(), report);
         });

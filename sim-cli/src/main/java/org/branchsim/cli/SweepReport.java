@@ -6,10 +6,13 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Arrays;
 import java.util.Locale;
+import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.branchsim.core.study.Variant;
+import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Unit;
+import org.branchsim.core.units.UnitSystem;
 import org.branchsim.core.units.Units;
 import org.branchsim.plots.HeatMap;
 import org.branchsim.plots.SweepOverlay;
@@ -17,7 +20,8 @@ import org.branchsim.plots.TraceCharts;
 
 /**
  * The results of a whole sweep, from its rows in variant order: the ranked table on the console,
- * summary.csv, one overlay figure per signal (coloured by the first varied value past six variants) and, for a
+ * summary.csv, one overlay figure per signal (coloured by the first varied value past six variants), for a reducing
+ * valve's outlet pressure a second one zoomed on the landing of every variant and, for a
  * two-parameter grid, a heat map of the ranking metric. Both an unsharded sweep and a merge of its shards write
  * through here, so that their folders are the same.
  */
@@ -48,7 +52,8 @@ final class SweepReport {
 
     /**
      * Writes one overlay per signal: past {@link SweepOverlay#MAX_LEGEND} variants, coloured by the first varied
-     * parameter's value with a colour bar; and, for a two-parameter grid, a heat map of the ranking metric.
+     * parameter's value with a colour bar; for a reducing valve's outlet pressure, the landing overlay
+     * ({@code overlay-<signal>-landing.png}); and, for a two-parameter grid, a heat map of the ranking metric.
      */
     private static void writeOverlays(SweepDefinition study, List<StudyTable.Row> rows, OutputFolder folder) {
         List<StudyTable.Row> ok = rows.stream().filter(StudyTable.Row::ok).toList();
@@ -68,6 +73,11 @@ final class SweepReport {
             String file = "overlay-" + FigureSet.slug(signal) + ".png";
             folder.write(file, p -> SweepOverlay.save(runs, signal, varied, study.scenario() + " sweep: " + signal,
                     study.units(), p));
+            List<SweepOverlay.Landed> landed = landed(signal, ok, runs, study.units());
+            if (!landed.isEmpty()) {
+                folder.write(landingFile(signal), p -> SweepOverlay.saveLanding(landed, signal, varied,
+                        study.scenario() + " sweep: landing of " + signal, study.units(), p));
+            }
         }
         if (study.axes().size() == 2 && study.rankBy() != null) {
             SweepDefinition.Axis second = study.axes().get(1);
@@ -78,6 +88,49 @@ final class SweepReport {
                             + "]"), study.rankBy(), study.scenario() + " sweep: " + study.rankBy() + " over the grid",
                     p));
         }
+    }
+
+    /** @return the file name of the landing overlay of a signal, beside its full overlay */
+    static String landingFile(String signal) {
+        return "overlay-" + FigureSet.slug(signal) + "-landing.png";
+    }
+
+    /**
+     * @param signal an overlay signal
+     * @param ok the rows that ran, in the order of {@code runs}
+     * @param runs their overlay variants
+     * @param units the unit system the metrics are in
+     * @return each variant with its setting and peak when the signal is a reducing valve's outlet pressure (its
+     *         metrics have the valve's steady outlet pressure and deviation), else nothing. The setting is found
+     *         from the variant's own metrics, steady / (1 + deviation / 100), since a variant may change it
+     */
+    static List<SweepOverlay.Landed> landed(String signal, List<StudyTable.Row> ok, List<SweepOverlay.Variant> runs,
+                                            UnitSystem units) {
+        String suffix = ".p.out";
+        if (!signal.endsWith(suffix)) {
+            return List.of();
+        }
+        String id = signal.substring(0, signal.length() - suffix.length());
+        Unit pu = units.displayUnit(Dimension.PRESSURE);
+        String steadyColumn = id + ".steadyOutlet [" + pu.symbol() + "]";
+        String deviationColumn = id + ".deviation [%]";
+        String peakColumn = id + ".peakOutlet [" + pu.symbol() + "]";
+        List<SweepOverlay.Landed> out = new ArrayList<>();
+        for (int k = 0; k < ok.size(); k++) {
+            Map<String, Double> m = ok.get(k).metrics();
+            Double steady = m.get(steadyColumn);
+            Double deviation = m.get(deviationColumn);
+            if (steady == null || deviation == null) {
+                return List.of();
+            }
+            double setting = pu.toSi(steady / (1 + deviation / 100));
+            if (!(setting > 0) || Double.isInfinite(setting)) {
+                return List.of();
+            }
+            Double peak = m.get(peakColumn);
+            out.add(new SweepOverlay.Landed(runs.get(k), setting, peak == null ? Double.NaN : pu.toSi(peak)));
+        }
+        return out;
     }
 
     /** @return the metric at each grid point [first axis index][second axis index], NaN where the run failed */

@@ -94,8 +94,8 @@ class ShardMergeTest {
         List<String> args = new ArrayList<>(List.of(study));
         args.addAll(List.of("--threads", "2", "--out", whole.toString()));
         RunCommandTest.Outcome unsharded = ok(args.toArray(String[]::new));
-        assertTrue(names(whole).containsAll(List.of("summary.csv", "overlay-reducer-p-out.png", OutputFolder.MARKER)),
-                names(whole).toString());
+        assertTrue(names(whole).containsAll(List.of("summary.csv", "overlay-reducer-p-out.png",
+                "overlay-reducer-p-out-landing.png", OutputFolder.MARKER)), names(whole).toString());
         assertEquals(1 + 4, Files.readAllLines(whole.resolve("summary.csv")).size(), "header and 4 variants");
         for (int n : new int[] {2, 3}) {
             Path shardDir = Files.createDirectory(dir.resolve("n" + n));
