@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.ReducingValveMetrics;
+import org.branchsim.core.results.EventRecord;
 import org.branchsim.core.results.Trace;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.units.Dimension;
@@ -88,12 +89,12 @@ public final class FigureSet {
      * coarse for that, the scenario is run again to the window's end on a finer one ({@link WaveformRun}) and its
      * seat and stop impacts are marked; the subtitle says the sample spacing drawn.
      */
-    public static void writeOscillations(Scenario scenario, Trace trace, List<OscillationFinding> findings,
-                                         OutputFolder out) {
+    public static void writeOscillations(Scenario scenario, Trace trace, List<EventRecord> events,
+                                         List<OscillationFinding> findings, OutputFolder out) {
         int k = 0;
         for (OscillationFinding f : findings) {
             k++;
-            CycleChart.Figure figure = oscillationFigure(scenario, trace, f);
+            CycleChart.Figure figure = oscillationFigure(scenario, trace, events, f);
             out.write(String.format(Locale.ROOT, "oscillation-%d-%s.png", k, slug(f.dominant().signal())),
                     figure::save);
         }
@@ -102,16 +103,18 @@ public final class FigureSet {
     /**
      * @param scenario the scenario that was run
      * @param trace its samples
+     * @param events its event log (for the seat and stop impacts), or null when not at hand
      * @param f an oscillation found in them
      * @return the figure of its last {@link #OSCILLATION_CYCLES} cycles, from samples that resolve its waveform
      */
-    static CycleChart.Figure oscillationFigure(Scenario scenario, Trace trace, OscillationFinding f) {
+    static CycleChart.Figure oscillationFigure(Scenario scenario, Trace trace, List<EventRecord> events,
+                                               OscillationFinding f) {
         String signal = f.dominant().signal();
         double to = f.window().to();
         double from = Math.max(f.window().from(), to - OSCILLATION_CYCLES / f.frequency());
         String title = String.format(Locale.ROOT, "%s: %s of %s at %.1f Hz, last %d cycles before %.3f s",
                 scenario.name(), f.kind().label(), f.name(), f.frequency(), OSCILLATION_CYCLES, to);
-        WaveformRun w = WaveformRun.of(scenario.circuit(), scenario.solver(), trace, null, f.frequency(), to);
+        WaveformRun w = WaveformRun.of(scenario.circuit(), scenario.solver(), trace, events, f.frequency(), to);
         List<CycleChart.Run> runs = List.of(new CycleChart.Run(new TraceCharts.Labelled("as run", w.trace()),
                 w.impacts(from, to), w.impactLabel("as run", from, to)));
         return new CycleChart.Figure(runs, signal, title, w.sampling(), scenario.units(), from, to);

@@ -57,7 +57,7 @@ public final class RunCommand implements Callable<Integer> {
                 folder.writeText("metrics.json",
                         MetricsReport.toJson(MetricsReport.build(s, result, valves, oscillations)));
                 FigureSet.write(s, trace, valves, folder);
-                FigureSet.writeOscillations(s, trace, oscillations, folder);
+                FigureSet.writeOscillations(s, trace, result.events(), oscillations, folder);
                 ReportPage.run(s, result, valves, oscillations, folder);
             }
             folder.writeText("summary.txt", summary);

@@ -54,7 +54,7 @@ class OscillationFigureTest {
 
     @Test
     void theFigureResolvesTheWaveformAndMarksTheSeatImpacts() {
-        JFreeChart chart = FigureSet.oscillationFigure(scenario, result.trace(), finding).chart();
+        JFreeChart chart = FigureSet.oscillationFigure(scenario, result.trace(), result.events(), finding).chart();
         XYPlot plot = chart.getXYPlot();
         Range time = plot.getDomainAxis().getRange();
         assertTrue(time.getLowerBound() >= finding.window().from() - 1e-12
