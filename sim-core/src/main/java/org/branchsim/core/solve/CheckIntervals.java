@@ -43,6 +43,14 @@ final class CheckIntervals {
         return memberInterval.getOrDefault(id, maxStep);
     }
 
+    /**
+     * @return the shortest check interval of any member's stop events, s (the longest step when no member has
+     *         a restoring stiffness): a step no longer than this cannot hold a member's swing out and back
+     */
+    double shortest() {
+        return memberInterval.values().stream().mapToDouble(Double::doubleValue).min().orElse(maxStep);
+    }
+
     /** @return the check interval of one discontinuity */
     AdaptableInterval of(Discontinuity d) {
         boolean stop = d.kind().equals("seat") || d.kind().equals("stop");

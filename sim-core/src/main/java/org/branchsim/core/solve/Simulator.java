@@ -78,7 +78,7 @@ public final class Simulator {
         SharedView views = new SharedView(engine);
         boolean implicit = integrator instanceof RosenbrockIntegrator;
         CheckIntervals intervals = new CheckIntervals(engine, settings.maxStep(), y0);
-        StepCheckTimes checkTimes = new StepCheckTimes();
+        StepCheckTimes checkTimes = new StepCheckTimes(intervals.shortest());
         KnownTimes known = implicit ? new KnownTimes(log) : null;
         for (Discontinuity d : model.discontinuities()) {
             if (known != null && known.accepts(d)) {

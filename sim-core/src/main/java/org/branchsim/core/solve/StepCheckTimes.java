@@ -23,7 +23,9 @@ import org.hipparchus.ode.sampling.ODEStateInterpolator;
  * Hipparchus places the next check at {@code done + remaining / ceil(remaining / interval)}, i.e. at or before
  * the time asked for; asking for the extremum's time again from there closes the gap quadratically, and an
  * extremum within {@link #REACHED} of a step's length is taken as checked (g then differs from its extremum value
- * by about 1e-8 of its change over the step). Times in s.
+ * by about 1e-8 of its change over the step). Steps shorter than a fifth of the fastest member's natural period
+ * are only checked at their ends, as they always were: on a circuit that oscillates the method takes thousands
+ * of such steps, and looking inside each cost about a tenth of the run. Times in s.
  */
 final class StepCheckTimes implements AdaptableInterval {
 
@@ -33,12 +35,22 @@ final class StepCheckTimes implements AdaptableInterval {
     static final double NEAR_ZERO = 0.1;
 
     private final List<ToDoubleFunction<ODEStateAndDerivative>> functions = new ArrayList<>();
+    private final double shortStep;
     private double t0 = Double.NaN;
     private double t1 = Double.NaN;
     private double[] times = new double[8];
     private int count;
     private double[][] samples = new double[0][4];
     private long interiorChecks;
+
+    /**
+     * @param shortStep steps no longer than this, s, are checked at their ends only: a fifth of the fastest
+     *        member's natural period ({@link CheckIntervals#shortest()}), too short for a swing out and back
+     *        (common practice, no source); 0 to look inside every step
+     */
+    StepCheckTimes(double shortStep) {
+        this.shortStep = shortStep;
+    }
 
     /**
      * @param g a switching function to watch; its check times join those of the others (all detectors of a run
@@ -61,7 +73,7 @@ final class StepCheckTimes implements AdaptableInterval {
         t1 = end.getTime();
         count = 0;
         double h = t1 - t0;
-        if (!(h > 0.0) || functions.isEmpty()) {
+        if (!(h > shortStep) || functions.isEmpty()) {
             return;
         }
         int m = functions.size();

@@ -67,7 +67,7 @@ class StepCheckTimesTest {
         RosenbrockIntegrator integrator = new RosenbrockIntegrator(RosenbrockScheme.RODAS4, 1e-12, 1.0, tol, tol,
                 SparsityPattern.dense(2), 1);
         List<Double> crossings = new ArrayList<>();
-        StepCheckTimes checks = new StepCheckTimes();
+        StepCheckTimes checks = new StepCheckTimes(0.0);
         Stop stop = new Stop(extremaChecked ? checks : AdaptableInterval.of(Double.MAX_VALUE), crossings);
         checks.watch(stop::g);
         if (extremaChecked) {
