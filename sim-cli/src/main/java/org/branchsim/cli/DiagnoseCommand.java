@@ -132,7 +132,7 @@ public final class DiagnoseCommand implements Callable<Integer> {
         for (String signal : signals) {
             String slug = FigureSet.slug(signal);
             String title = String.format(Locale.ROOT, "%s, finding %d (%s at %.1f Hz): before and after", s.name(), k,
-                    f.kind().label(), f.frequency());
+                    f.label(), f.frequency());
             folder.write("finding" + k + "-" + slug + "-interval.png",
                     p -> TraceCharts.compare(runs, signal, title, s.units(), p, w.changeEnd(), w.to()));
             folder.write("finding" + k + "-" + slug + "-cycles.png", new CycleChart.Figure(zoomed, signal,

@@ -57,6 +57,13 @@ final class DiagnosisJson {
         ObjectNode o = MetricsReport.mapper().createObjectNode();
         o.put("name", f.name());
         o.put("kind", f.kind().label());
+        o.put("label", f.label());
+        if (f.drivenBy() != null) {
+            o.put("drivenBy", f.drivenBy());
+        }
+        if (Double.isFinite(f.dampingRatioFromDecay())) {
+            o.put("dampingRatioFromDecay", f.dampingRatioFromDecay());
+        }
         o.put("fundamental_Hz", MetricsReport.round(f.frequency()));
         o.put("trend", f.trend().label());
         o.put("growthRate_1_per_s", MetricsReport.round(f.growthRate()));

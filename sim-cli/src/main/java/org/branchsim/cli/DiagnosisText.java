@@ -27,6 +27,13 @@ final class DiagnosisText {
         String what = f.kind() == OscillationFinding.Kind.CHATTER
                 ? String.format(Locale.ROOT, "chatter (%s strikes its seat or stop %.2f times per cycle, %.0f a second)",
                 f.impactingMember(), f.impactsPerCycle().get(f.impactingMember()), f.impactsPerSecond())
+                : f.drivenBy() != null
+                ? "forced response (no seat or stop impacts; at the frequency of the " + f.drivenBy()
+                        + ": driven from outside the loop, not a self-sustained oscillation)"
+                : f.label().equals("ringing")
+                ? String.format(Locale.ROOT, "ringing (no seat or stop impacts; a damped response that decays over the "
+                        + "window, damping ratio %.3f from its decay, not a self-sustained oscillation)",
+                f.dampingRatioFromDecay())
                 : "hunting (no seat or stop impacts)";
         String others = f.otherFrequencies().isEmpty() ? ""
                 : "; the same parts also show peaks at " + f.otherFrequencies().stream().limit(4)
@@ -90,7 +97,7 @@ final class DiagnosisText {
             return "the run failed: " + t.outcome().error();
         }
         String verdict = t.cures() ? "no oscillation left from the start of the run"
-                : t.remaining().stream().map(f -> String.format(Locale.ROOT, "%s of %s at %.1f Hz remains", f.kind().label(),
+                : t.remaining().stream().map(f -> String.format(Locale.ROOT, "%s of %s at %.1f Hz remains", f.label(),
                 f.name(), f.frequency())).collect(Collectors.joining("; "));
         String cost = t.metrics().stream().map(m -> metrics(m, units)).collect(Collectors.joining("; "));
         return verdict + (cost.isEmpty() ? "" : "; " + cost) + String.format(Locale.ROOT, "; cost %.2f", t.cost());

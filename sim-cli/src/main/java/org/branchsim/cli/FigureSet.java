@@ -113,7 +113,7 @@ public final class FigureSet {
         double to = f.window().to();
         double from = Math.max(f.window().from(), to - OSCILLATION_CYCLES / f.frequency());
         String title = String.format(Locale.ROOT, "%s: %s of %s at %.1f Hz, last %d cycles before %.3f s",
-                scenario.name(), f.kind().label(), f.name(), f.frequency(), OSCILLATION_CYCLES, to);
+                scenario.name(), f.label(), f.name(), f.frequency(), OSCILLATION_CYCLES, to);
         WaveformRun w = WaveformRun.of(scenario.circuit(), scenario.solver(), trace, events, f.frequency(), to);
         List<CycleChart.Run> runs = List.of(new CycleChart.Run(new TraceCharts.Labelled("as run", w.trace()),
                 w.impacts(from, to), w.impactLabel("as run", from, to)));

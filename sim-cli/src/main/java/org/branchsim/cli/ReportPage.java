@@ -103,7 +103,8 @@ final class ReportPage {
             page.paragraph("None in the later half of any interval between schedule changes.");
         }
         for (OscillationFinding f : oscillations) {
-            page.paragraph(DiagnosisText.describe(f, s.units()) + " (branchsim diagnose names a remedy).");
+            page.paragraph(DiagnosisText.describe(f, s.units())
+                    + (f.drivenBy() == null ? " (branchsim diagnose names a remedy)." : "."));
         }
         write(page, folder, (pg, report) -> {
             figures(pg, folder.written(), report);

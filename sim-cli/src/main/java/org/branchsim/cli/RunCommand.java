@@ -153,7 +153,7 @@ public final class RunCommand implements Callable<Integer> {
         }
         for (OscillationFinding f : osc) {
             sb.append("oscillation: ").append(DiagnosisText.describe(f, s.units()))
-                    .append(" (try 'branchsim diagnose')").append(nl);
+                    .append(f.drivenBy() == null ? " (try 'branchsim diagnose')" : "").append(nl);
         }
         cylinderAndCavitationLines(sb, s, r);
         Unit eu = s.units().displayUnit(Dimension.ENERGY);

@@ -26,11 +26,25 @@ import org.branchsim.core.units.Dimension;
  * @param otherFrequencies other fundamentals of the same parts in the strongest window, Hz (a modulated or
  *        irregular oscillation spreads over several peaks), strongest first
  * @param mode the linear mode the oscillation belongs to (null when not matched or not linearised)
+ * @param drivenBy the periodic drive whose frequency (or a multiple up to {@link #DRIVE_MULTIPLES}) the oscillation
+ *        has, in words (a pump's flow ripple), or null: a driven oscillation is a forced response
  */
 public record OscillationFinding(Kind kind, double frequency, Oscillation.Trend trend, double growthRate,
                                  ScanWindow window, List<ScanWindow> seenIn, List<SignalOscillation> signals,
                                  List<String> parts, Map<String, Double> impactsPerCycle,
-                                 List<Double> otherFrequencies, ModeMatch mode) {
+                                 List<Double> otherFrequencies, ModeMatch mode, String drivenBy) {
+
+    /** A finding not tied to a periodic drive. */
+    public OscillationFinding(Kind kind, double frequency, Oscillation.Trend trend, double growthRate,
+                              ScanWindow window, List<ScanWindow> seenIn, List<SignalOscillation> signals,
+                              List<String> parts, Map<String, Double> impactsPerCycle, List<Double> otherFrequencies,
+                              ModeMatch mode) {
+        this(kind, frequency, trend, growthRate, window, seenIn, signals, parts, impactsPerCycle, otherFrequencies,
+                mode, null);
+    }
+
+    /** Multiples of a drive's frequency at which an oscillation counts as driven by it. */
+    public static final int DRIVE_MULTIPLES = 4;
 
     /** Impacts per cycle of one member from which an oscillation counts as chatter. */
     public static final double CHATTER_IMPACTS_PER_CYCLE = 0.5;
@@ -86,6 +100,38 @@ public record OscillationFinding(Kind kind, double frequency, Oscillation.Trend 
         return m == null ? 0.0 : impactsPerCycle.get(m) * frequency;
     }
 
+    /**
+     * @return what a reader calls it: "chatter"; "forced response" when it has no impacts and is at a periodic
+     *         drive's frequency; "hunting" when it holds or grows over the window; "ringing" when
+     *         it has no impacts and decays over the window (a damped response to the last change, still visible at
+     *         the window's end, not a self-sustained oscillation)
+     */
+    public String label() {
+        if (kind == Kind.HUNTING && drivenBy != null) {
+            return "forced response";
+        }
+        if (kind == Kind.HUNTING && trend == Oscillation.Trend.DECAYING) {
+            return "ringing";
+        }
+        return kind.label();
+    }
+
+    /**
+     * The damping ratio of a ringing from its decay: for x = A e^(sigma t) cos(omega_d t), zeta = -sigma /
+     * sqrt(sigma^2 + omega_d^2) (the underdamped second-order response, e.g. K. Ogata, Modern Control Engineering,
+     * 5th ed., 2010, sec. 5-3), with sigma the fundamental's growth rate over the window and omega_d = 2 pi f.
+     *
+     * @return the damping ratio, NaN unless the oscillation decays
+     */
+    public double dampingRatioFromDecay() {
+        double sigma = growthRate;
+        if (!(sigma < 0.0) || trend != Oscillation.Trend.DECAYING) {
+            return Double.NaN;
+        }
+        double omega = 2.0 * Math.PI * frequency;
+        return -sigma / Math.sqrt(sigma * sigma + omega * omega);
+    }
+
     /** @return the name of the oscillation from its parts, e.g. "reducer.pilot + reducer.chamber" */
     public String name() {
         return String.join(" + ", parts.subList(0, Math.min(3, parts.size())));
@@ -132,6 +178,6 @@ public record OscillationFinding(Kind kind, double frequency, Oscillation.Trend 
             named.addAll(parts);
         }
         return new OscillationFinding(kind, frequency, trend, growthRate, window, seenIn, signals, named,
-                impactsPerCycle, otherFrequencies, match);
+                impactsPerCycle, otherFrequencies, match, drivenBy);
     }
 }

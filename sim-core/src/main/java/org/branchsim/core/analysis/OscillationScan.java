@@ -7,6 +7,8 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.branchsim.core.model.Element;
+import org.branchsim.core.model.PeriodicDrive;
 import org.branchsim.core.results.EventRecord;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.results.Trace;
@@ -80,7 +82,7 @@ public final class OscillationScan {
         List<OscillationFinding> all = new ArrayList<>();
         for (int w = 0; w < windows.size(); w++) {
             for (List<OscillationGroup> family : fold(OscillationGrouping.group(components.get(w)))) {
-                all.add(finding(family, windows.get(w), result.events()));
+                all.add(finding(family, windows.get(w), result.events(), drives(result, windows.get(w))));
             }
         }
         return merge(all);
@@ -150,7 +152,61 @@ public final class OscillationScan {
         return parts;
     }
 
-    private static OscillationFinding finding(List<OscillationGroup> family, ScanWindow w, List<EventRecord> events) {
+    /** A periodic drive's fundamental in one window: Hz, and the drive in words. */
+    private record Drive(double frequency, String description) {
+    }
+
+    /**
+     * @return the fundamental frequency of every periodic drive of the model (a pump's flow ripple) over the
+     *         window: periods per turn times the mean shaft speed in the window / 2 pi
+     */
+    private static List<Drive> drives(SimulationResult result, ScanWindow w) {
+        List<Drive> out = new ArrayList<>();
+        Trace trace = result.trace();
+        for (Element e : result.model().elements()) {
+            if (!(e instanceof PeriodicDrive d) || d.drivePeriodsPerTurn() <= 0) {
+                continue;
+            }
+            int column = trace.indexOf(d.driveSpeedSignal());
+            if (column < 0) {
+                continue;
+            }
+            double[] t = trace.times();
+            double[] speed = trace.series(column);
+            double sum = 0.0;
+            int n = 0;
+            for (int k = 0; k < t.length; k++) {
+                if (w.contains(t[k])) {
+                    sum += speed[k];
+                    n++;
+                }
+            }
+            double hz = n == 0 ? 0.0 : d.drivePeriodsPerTurn() * Math.abs(sum / n) / (2.0 * Math.PI);
+            if (hz > 0.0) {
+                out.add(new Drive(hz, d.driveDescription()));
+            }
+        }
+        return out;
+    }
+
+    /**
+     * @return the drive whose frequency, or a multiple of it up to {@link OscillationFinding#DRIVE_MULTIPLES}, lies
+     *         within {@link OscillationDetector#HARMONIC_TOLERANCE} of f, in words with its frequency; else null
+     */
+    private static String drivenBy(double f, List<Drive> drives) {
+        for (Drive d : drives) {
+            for (int m = 1; m <= OscillationFinding.DRIVE_MULTIPLES; m++) {
+                if (Math.abs(f - m * d.frequency()) <= OscillationDetector.HARMONIC_TOLERANCE * d.frequency()) {
+                    return String.format(java.util.Locale.ROOT, "%s at %.1f Hz%s", d.description(), d.frequency(),
+                            m == 1 ? "" : ", the oscillation at " + m + " times that");
+                }
+            }
+        }
+        return null;
+    }
+
+    private static OscillationFinding finding(List<OscillationGroup> family, ScanWindow w, List<EventRecord> events,
+                                              List<Drive> drives) {
         OscillationGroup g = family.get(0);
         List<Double> others = new ArrayList<>();
         for (int i = 1; i < family.size(); i++) {
@@ -175,7 +231,7 @@ public final class OscillationScan {
         boolean chatter = perCycle.values().stream().anyMatch(v -> v >= OscillationFinding.CHATTER_IMPACTS_PER_CYCLE);
         return new OscillationFinding(chatter ? OscillationFinding.Kind.CHATTER : OscillationFinding.Kind.HUNTING,
                 g.frequency(), g.trend(), g.growthRate(), w, List.of(w), signals, List.copyOf(parts), perCycle, others,
-                null);
+                null, chatter ? null : drivenBy(g.frequency(), drives));
     }
 
     /** Joins the findings of different windows that are the same oscillation; keeps each at its strongest. */
@@ -209,7 +265,7 @@ public final class OscillationScan {
                     .sorted(Comparator.comparingDouble(ScanWindow::from)).toList();
             out.add(new OscillationFinding(strongest.kind(), strongest.frequency(), strongest.trend(),
                     strongest.growthRate(), strongest.window(), windows, strongest.signals(), strongest.parts(),
-                    strongest.impactsPerCycle(), strongest.otherFrequencies(), null));
+                    strongest.impactsPerCycle(), strongest.otherFrequencies(), null, strongest.drivenBy()));
         }
         out.sort(Comparator.comparingDouble((OscillationFinding f) -> f.dominant().strength()).reversed()
                 .thenComparing(f -> f.dominant().signal()));

@@ -10,6 +10,7 @@ import org.branchsim.core.model.Element;
 import org.branchsim.core.model.EnergyAccount;
 import org.branchsim.core.model.Evaluation;
 import org.branchsim.core.model.Node;
+import org.branchsim.core.model.PeriodicDrive;
 import org.branchsim.core.model.ScheduledInput;
 import org.branchsim.core.model.SignalHandle;
 import org.branchsim.core.model.StateSlot;
@@ -41,7 +42,7 @@ import org.branchsim.core.units.Dimension;
  * Merritt 1967 (orifice, compressibility). See docs/theory.md 6.13. The Jacobian is differenced (no closed-form
  * partials).
  */
-public final class CompensatedPump implements Element {
+public final class CompensatedPump implements Element, PeriodicDrive {
 
     /**
      * Compensator spool.
@@ -175,6 +176,16 @@ public final class CompensatedPump implements Element {
     @Override
     public List<Node> ports() {
         return List.of(inlet, outlet);
+    }
+
+    @Override
+    public int drivePeriodsPerTurn() {
+        return ripple == null ? 0 : ripple.periodsPerTurn();
+    }
+
+    @Override
+    public String driveDescription() {
+        return ripple == null ? "" : ripple.describe(id());
     }
 
     @Override

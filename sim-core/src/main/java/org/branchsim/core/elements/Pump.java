@@ -7,6 +7,7 @@ import org.branchsim.core.model.Element;
 import org.branchsim.core.model.EnergyAccount;
 import org.branchsim.core.model.Evaluation;
 import org.branchsim.core.model.Node;
+import org.branchsim.core.model.PeriodicDrive;
 import org.branchsim.core.model.ScheduledInput;
 import org.branchsim.core.model.SignalHandle;
 import org.branchsim.core.model.StateSlot;
@@ -20,7 +21,7 @@ import org.branchsim.core.units.Dimension;
  * of the shaft angle theta (a state, theta' = omega, rad): Q = eta_v D omega f(theta), dQ/dtheta = eta_v D omega
  * f'(theta).
  */
-public final class Pump implements Element {
+public final class Pump implements Element, PeriodicDrive {
     private final String id;
     private final Node inlet;
     private final Node outlet;
@@ -78,6 +79,16 @@ public final class Pump implements Element {
     @Override
     public List<Node> ports() {
         return List.of(inlet, outlet);
+    }
+
+    @Override
+    public int drivePeriodsPerTurn() {
+        return ripple == null ? 0 : ripple.periodsPerTurn();
+    }
+
+    @Override
+    public String driveDescription() {
+        return ripple == null ? "" : ripple.describe(id());
     }
 
     @Override

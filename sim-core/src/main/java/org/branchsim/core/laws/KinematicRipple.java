@@ -44,6 +44,15 @@ public record KinematicRipple(Kind kind, int count, double pressureAngle) {
         }
     }
 
+    /**
+     * @param owner the id of the pump
+     * @return the ripple in words, e.g. "flow ripple of pump (axial piston, 9 pistons: 18 periods a turn)"
+     */
+    public String describe(String owner) {
+        String what = kind == Kind.AXIAL_PISTON ? "axial piston, " + count + " pistons" : "gear, " + count + " teeth";
+        return "flow ripple of " + owner + " (" + what + ": " + periodsPerTurn() + " periods a turn)";
+    }
+
     /** @return the number of ripple periods per shaft turn (2z for an odd piston count, else z) */
     public int periodsPerTurn() {
         return kind == Kind.AXIAL_PISTON && count % 2 == 1 ? 2 * count : count;

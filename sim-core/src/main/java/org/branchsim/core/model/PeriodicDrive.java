@@ -1,0 +1,23 @@
+package org.branchsim.core.model;
+
+/**
+ * An element that drives the circuit at a frequency of its own, tied to a shaft's speed: a pump's flow ripple
+ * repeats a fixed number of times per shaft turn. An oscillation of the circuit at that frequency (or a small
+ * multiple of it) is a forced response, not a self-sustained one.
+ */
+public interface PeriodicDrive {
+
+    /** @return the element's id */
+    String id();
+
+    /** @return periods of the drive per shaft turn; 0 when it drives nothing (e.g. a pump without ripple) */
+    int drivePeriodsPerTurn();
+
+    /** @return the name of the signal that carries the shaft speed, rad/s */
+    default String driveSpeedSignal() {
+        return id() + ".speed";
+    }
+
+    /** @return what drives, in words, e.g. "flow ripple of pump (9 pistons, 18 periods a turn)" */
+    String driveDescription();
+}
