@@ -189,6 +189,11 @@ public final class CompensatedPump implements Element, PeriodicDrive {
     }
 
     @Override
+    public StateSlot drivePhase() {
+        return angle;
+    }
+
+    @Override
     public void bind(Binder b) {
         fluid = b.fluid();
         transitionConstant = OrificeLaw.transitionConstant(comp.cd(), fluid.density(), fluid.kinematicViscosity());

@@ -92,6 +92,11 @@ public final class Pump implements Element, PeriodicDrive {
     }
 
     @Override
+    public StateSlot drivePhase() {
+        return angle;
+    }
+
+    @Override
     public void bind(Binder b) {
         b.input(speed);
         if (ripple != null) {

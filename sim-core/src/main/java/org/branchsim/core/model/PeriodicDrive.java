@@ -20,4 +20,14 @@ public interface PeriodicDrive {
 
     /** @return what drives, in words, e.g. "flow ripple of pump (9 pistons, 18 periods a turn)" */
     String driveDescription();
+
+    /**
+     * @return the state that carries the drive's phase (a shaft angle, rad), or null when there is none. Its rate
+     *         is the shaft speed whatever the circuit does, so it never comes to rest: an operating point holds it
+     *         at its value (the drive's factor frozen there) instead of solving for it, and a linearisation leaves
+     *         it out of the modes
+     */
+    default StateSlot drivePhase() {
+        return null;
+    }
 }

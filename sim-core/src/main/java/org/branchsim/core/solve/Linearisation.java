@@ -4,7 +4,9 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import org.branchsim.core.model.CircuitModel;
+import org.branchsim.core.model.Element;
 import org.branchsim.core.model.Member;
+import org.branchsim.core.model.PeriodicDrive;
 import org.branchsim.core.model.StateSlot;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.solve.stiff.DifferenceJacobian;
@@ -123,6 +125,11 @@ public final class Linearisation {
             if (engine.mode(k) != Member.Mode.FREE) {
                 held[engine.position(members.get(k).positionSlot())] = true;
                 held[engine.position(members.get(k).velocitySlot())] = true;
+            }
+        }
+        for (Element e : model.elements()) {
+            if (e instanceof PeriodicDrive d && d.drivePhase() != null) {
+                held[engine.position(d.drivePhase())] = true;
             }
         }
         List<StateSlot> free = new ArrayList<>();

@@ -195,4 +195,42 @@ class OperatingPointSolverTest {
         double speed = FLOW / (Math.PI * 0.025 * 0.025);
         assertEquals(speed, Double.parseDouble(m.group(1)), 0.01 * speed);
     }
+
+    /**
+     * A pump with flow ripple never comes to rest (its shaft angle turns at the shaft speed), yet its circuit has
+     * an operating point once the angle is held: the delivery frozen at Q f(theta) with the axial-piston ripple
+     * factor f = (pi / z) sum_i max(0, sin(theta + 2 pi i / z)) (Ivantysyn and Ivantysynova, Hydrostatic Pumps and
+     * Motors, 2001, kinematic flow pulsation; from memory, as in docs/theory.md 6.1), and the line upstream of an
+     * orifice to tank at dp = (rho / 2) (Q f / (Cd A))^2 (turbulent orifice law, Merritt 1967).
+     */
+    @Test
+    void aRipplingPumpsCircuitHasAnOperatingPointWithItsShaftAngleHeld() {
+        int pistons = 9;
+        double theta = 0.1;
+        Node tank = Node.tank("tank", 0.0);
+        Node line = Node.volume("line", 0.2e-3, Double.POSITIVE_INFINITY, 0.0);
+        double orifice = 1.2e-3;
+        CircuitModel c = new CircuitBuilder("rippling", OIL).add(tank).add(line)
+                .add(new Pump("pump", tank, line, FLOW / PUMP_SPEED, PUMP_SPEED, 1.0,
+                        new org.branchsim.core.laws.KinematicRipple(
+                                org.branchsim.core.laws.KinematicRipple.Kind.AXIAL_PISTON, pistons, 0.0)))
+                .add(new Orifice("orifice", line, tank, OrificeLaw.circleArea(orifice), CD)).build();
+        double[] start = c.initialState();
+        start[index(c, "pump.shaft.angle")] = theta;
+        start[index(c, "line.p")] = 10e5;
+
+        OperatingPoint op = OperatingPointSolver.solve(c, 0.0, start, Map.of());
+
+        double f = 0.0;
+        for (int i = 0; i < pistons; i++) {
+            f += Math.max(0.0, Math.sin(theta + 2 * Math.PI * i / pistons));
+        }
+        f *= Math.PI / pistons;
+        double q = FLOW * f;
+        double area = Math.PI * orifice * orifice / 4;
+        double dp = OIL.density() / 2 * Math.pow(q / (CD * area), 2);
+        assertTrue(dp > 10e5, "turbulent: " + dp);
+        assertEquals(theta, op.state()[index(c, "pump.shaft.angle")], 0.0, "the angle is held where it was");
+        assertEquals(dp, op.state()[index(c, "line.p")], EQUILIBRIUM_TOLERANCE * dp * 100, "line pressure, Pa");
+    }
 }
