@@ -1,6 +1,9 @@
 package org.branchsim.cli;
 
 import java.io.PrintWriter;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import org.branchsim.core.error.BranchsimException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -11,13 +14,36 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "branchsim", mixinStandardHelpOptions = true, version = "branchsim 0.1.0",
         description = "Time-domain simulation of hydraulic circuits with a pressure-reducing branch.",
-        subcommands = {RunCommand.class, CheckCommand.class, SweepCommand.class, ModesCommand.class,
-            CharacteristicCommand.class, DiagnoseCommand.class, DiagramCommand.class, CompareCommand.class,
-            FitCommand.class, TuneCommand.class, ToleranceCommand.class, MergeCommand.class, TimingCommand.class,
-            SchemaCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Exit codes: 0 success, 1 simulation failed, 2 bad input or usage.",
             "Caution: " + Cautions.SHORT})
 public final class BranchsimMain implements Runnable {
+
+    /**
+     * The subcommands by name, in the order the help lists them. Only the one named on the command line is built
+     * (picocli reads each command's annotations when it is added, a third of a second for all of them at start-up);
+     * all are built for the top-level help and for an unknown name.
+     */
+    static final Map<String, Class<?>> SUBCOMMANDS = subcommands();
+
+    private static Map<String, Class<?>> subcommands() {
+        Map<String, Class<?>> m = new LinkedHashMap<>();
+        m.put("run", RunCommand.class);
+        m.put("check", CheckCommand.class);
+        m.put("sweep", SweepCommand.class);
+        m.put("modes", ModesCommand.class);
+        m.put("characteristic", CharacteristicCommand.class);
+        m.put("diagnose", DiagnoseCommand.class);
+        m.put("diagram", DiagramCommand.class);
+        m.put("compare", CompareCommand.class);
+        m.put("fit", FitCommand.class);
+        m.put("tune", TuneCommand.class);
+        m.put("tolerance", ToleranceCommand.class);
+        m.put("merge", MergeCommand.class);
+        m.put("timing", TimingCommand.class);
+        m.put("schema", SchemaCommand.class);
+        m.put("help", CommandLine.HelpCommand.class);
+        return Collections.unmodifiableMap(m);
+    }
 
     /** Exit code of a successful run. */
     public static final int OK = 0;
@@ -46,6 +72,13 @@ public final class BranchsimMain implements Runnable {
      */
     public static int execute(PrintWriter out, PrintWriter err, String... args) {
         CommandLine cl = new CommandLine(new BranchsimMain());
+        Class<?> only = args.length > 0 && !"help".equals(args[0]) ? SUBCOMMANDS.get(args[0]) : null;
+        boolean versionOnly = args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"));
+        if (only != null) {
+            cl.addSubcommand(args[0], only);
+        } else if (!versionOnly) {
+            SUBCOMMANDS.forEach(cl::addSubcommand);
+        }
         cl.setOut(out);
         cl.setErr(err);
         cl.setExitCodeExceptionMapper(e -> e instanceof BranchsimException b && !b.key().isInputError()
