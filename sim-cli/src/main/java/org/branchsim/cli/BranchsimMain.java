@@ -60,6 +60,23 @@ public final class BranchsimMain implements Runnable {
         throw new CommandLine.ParameterException(spec.commandLine(), "a command is needed (run, check, sweep, tolerance, merge, modes, diagnose, timing)");
     }
 
+    /**
+     * @param args the command line
+     * @return the command line with the subcommand it names (all subcommands for the top-level help, "help" or an
+     *         unknown name; none for the version alone)
+     */
+    static CommandLine commandLine(String... args) {
+        CommandLine cl = new CommandLine(new BranchsimMain());
+        Class<?> only = args.length > 0 && !"help".equals(args[0]) ? SUBCOMMANDS.get(args[0]) : null;
+        boolean versionOnly = args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"));
+        if (only != null) {
+            cl.addSubcommand(args[0], only);
+        } else if (!versionOnly) {
+            SUBCOMMANDS.forEach(cl::addSubcommand);
+        }
+        return cl;
+    }
+
     /** Entry point. */
     public static void main(String[] args) {
         System.exit(execute(new PrintWriter(System.out, true), new PrintWriter(System.err, true), args));
@@ -71,14 +88,7 @@ public final class BranchsimMain implements Runnable {
      * @return the exit code
      */
     public static int execute(PrintWriter out, PrintWriter err, String... args) {
-        CommandLine cl = new CommandLine(new BranchsimMain());
-        Class<?> only = args.length > 0 && !"help".equals(args[0]) ? SUBCOMMANDS.get(args[0]) : null;
-        boolean versionOnly = args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"));
-        if (only != null) {
-            cl.addSubcommand(args[0], only);
-        } else if (!versionOnly) {
-            SUBCOMMANDS.forEach(cl::addSubcommand);
-        }
+        CommandLine cl = commandLine(args);
         cl.setOut(out);
         cl.setErr(err);
         cl.setExitCodeExceptionMapper(e -> e instanceof BranchsimException b && !b.key().isInputError()

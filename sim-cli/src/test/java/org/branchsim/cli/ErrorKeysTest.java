@@ -41,7 +41,7 @@ class ErrorKeysTest {
     /** @return the exception a command line throws, caught before the command line turns it into an exit code */
     static BranchsimException thrownBy(String... args) {
         AtomicReference<Exception> seen = new AtomicReference<>();
-        CommandLine cl = new CommandLine(new BranchsimMain());
+        CommandLine cl = BranchsimMain.commandLine(args);
         cl.setOut(new PrintWriter(new StringWriter()));
         cl.setErr(new PrintWriter(new StringWriter()));
         cl.setExecutionExceptionHandler((ex, c, parse) -> {
