@@ -18,6 +18,7 @@ import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.solve.Simulator;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Unit;
+import org.branchsim.plots.TraceCharts;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -42,6 +43,10 @@ public final class RunCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        // the drawing classes load on the second core while the scenario is read and run
+        Thread warmUp = new Thread(TraceCharts::warmUp, "branchsim-figure-warm-up");
+        warmUp.setDaemon(true);
+        warmUp.start();
         Scenario s = scenario.load();
         try (OutputFolder folder = new OutputFolder(out != null ? out : Path.of("out", s.name()), scenario.file())) {
             SimulationResult result = Trace.spillingTo(TempFileSpace.inTemporaryDirectory(),
