@@ -3,6 +3,7 @@ package org.branchsim.cli;
 import java.io.PrintWriter;
 import java.util.Collections;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import org.branchsim.core.error.BranchsimException;
 import picocli.CommandLine;
@@ -18,30 +19,28 @@ import picocli.CommandLine.Command;
             "Caution: " + Cautions.SHORT})
 public final class BranchsimMain implements Runnable {
 
+    /** The subcommands, in the order the help lists them. */
+    private static final List<Class<?>> COMMANDS = List.of(RunCommand.class, CheckCommand.class, SweepCommand.class,
+            ModesCommand.class, CharacteristicCommand.class, DiagnoseCommand.class, DiagramCommand.class,
+            CompareCommand.class, FitCommand.class, TuneCommand.class, ToleranceCommand.class, MergeCommand.class,
+            TimingCommand.class, SchemaCommand.class, CommandLine.HelpCommand.class);
+
     /**
-     * The subcommands by name, in the order the help lists them. Only the one named on the command line is built
-     * (picocli reads each command's annotations when it is added, a third of a second for all of them at start-up);
-     * all are built for the top-level help and for an unknown name.
+     * Each subcommand under its name and its aliases, as its {@code @Command} annotation gives them. Only the one
+     * named on the command line is built (picocli reads each command's annotations when it is added, a third of a
+     * second for all of them at start-up); all are built for the top-level help and for an unknown name.
      */
     static final Map<String, Class<?>> SUBCOMMANDS = subcommands();
 
     private static Map<String, Class<?>> subcommands() {
         Map<String, Class<?>> m = new LinkedHashMap<>();
-        m.put("run", RunCommand.class);
-        m.put("check", CheckCommand.class);
-        m.put("sweep", SweepCommand.class);
-        m.put("modes", ModesCommand.class);
-        m.put("characteristic", CharacteristicCommand.class);
-        m.put("diagnose", DiagnoseCommand.class);
-        m.put("diagram", DiagramCommand.class);
-        m.put("compare", CompareCommand.class);
-        m.put("fit", FitCommand.class);
-        m.put("tune", TuneCommand.class);
-        m.put("tolerance", ToleranceCommand.class);
-        m.put("merge", MergeCommand.class);
-        m.put("timing", TimingCommand.class);
-        m.put("schema", SchemaCommand.class);
-        m.put("help", CommandLine.HelpCommand.class);
+        for (Class<?> c : COMMANDS) {
+            Command command = c.getAnnotation(Command.class);
+            m.put(command.name(), c);
+            for (String alias : command.aliases()) {
+                m.put(alias, c);
+            }
+        }
         return Collections.unmodifiableMap(m);
     }
 
@@ -70,9 +69,9 @@ public final class BranchsimMain implements Runnable {
         Class<?> only = args.length > 0 && !"help".equals(args[0]) ? SUBCOMMANDS.get(args[0]) : null;
         boolean versionOnly = args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"));
         if (only != null) {
-            cl.addSubcommand(args[0], only);
+            cl.addSubcommand(only);
         } else if (!versionOnly) {
-            SUBCOMMANDS.forEach(cl::addSubcommand);
+            COMMANDS.forEach(cl::addSubcommand);
         }
         return cl;
     }

@@ -24,17 +24,7 @@ final class DiagnosisText {
 
     /** @return one line describing an oscillation finding, in the scenario's units */
     static String describe(OscillationFinding f, UnitSystem units) {
-        String what = f.kind() == OscillationFinding.Kind.CHATTER
-                ? String.format(Locale.ROOT, "chatter (%s strikes its seat or stop %.2f times per cycle, %.0f a second)",
-                f.impactingMember(), f.impactsPerCycle().get(f.impactingMember()), f.impactsPerSecond())
-                : f.drivenBy() != null
-                ? "forced response (no seat or stop impacts; at the frequency of the " + f.drivenBy()
-                        + ": driven from outside the loop, not a self-sustained oscillation)"
-                : f.label().equals("ringing")
-                ? String.format(Locale.ROOT, "ringing (no seat or stop impacts; a damped response that decays over the "
-                        + "window, damping ratio %.3f from its decay, not a self-sustained oscillation)",
-                f.dampingRatioFromDecay())
-                : "hunting (no seat or stop impacts)";
+        String what = what(f);
         String others = f.otherFrequencies().isEmpty() ? ""
                 : "; the same parts also show peaks at " + f.otherFrequencies().stream().limit(4)
                 .map(x -> String.format(Locale.ROOT, "%.1f", x)).collect(Collectors.joining(", "))
@@ -42,6 +32,24 @@ final class DiagnosisText {
         return String.format(Locale.ROOT, "%s of %s at %.1f Hz, %s; strongest in %s (amplitude %s); seen %s%s", what,
                 f.name(), f.frequency(), f.trend().label(), f.dominant().signal(), amplitude(f.dominant(), units),
                 f.seenIn().stream().map(DiagnosisText::window).collect(Collectors.joining(", ")), others);
+    }
+
+    /** @return the finding's label with the evidence behind it */
+    private static String what(OscillationFinding f) {
+        if (f.kind() == OscillationFinding.Kind.CHATTER) {
+            return String.format(Locale.ROOT, "chatter (%s strikes its seat or stop %.2f times per cycle, %.0f a second)",
+                    f.impactingMember(), f.impactsPerCycle().get(f.impactingMember()), f.impactsPerSecond());
+        }
+        if (f.drivenBy() != null) {
+            return "forced response (no seat or stop impacts; at the frequency of the " + f.drivenBy()
+                    + ": driven from outside the loop, not a self-sustained oscillation)";
+        }
+        if (f.label().equals("ringing")) {
+            return String.format(Locale.ROOT, "ringing (no seat or stop impacts; a damped response that decays over the "
+                    + "window, damping ratio %.3f from its decay, not a self-sustained oscillation)",
+                    f.dampingRatioFromDecay());
+        }
+        return "hunting (no seat or stop impacts)";
     }
 
     static String amplitude(SignalOscillation s, UnitSystem units) {

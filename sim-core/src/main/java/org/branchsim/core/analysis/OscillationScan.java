@@ -82,7 +82,7 @@ public final class OscillationScan {
         List<OscillationFinding> all = new ArrayList<>();
         for (int w = 0; w < windows.size(); w++) {
             for (List<OscillationGroup> family : fold(OscillationGrouping.group(components.get(w)))) {
-                all.add(finding(family, windows.get(w), result.events(), drives(result, windows.get(w))));
+                all.add(finding(family, windows.get(w), result.events(), drives(result, t, windows.get(w))));
             }
         }
         return merge(all);
@@ -157,10 +157,11 @@ public final class OscillationScan {
     }
 
     /**
+     * @param t the trace's sample times, s
      * @return the fundamental frequency of every periodic drive of the model (a pump's flow ripple) over the
      *         window: periods per turn times the mean shaft speed in the window / 2 pi
      */
-    private static List<Drive> drives(SimulationResult result, ScanWindow w) {
+    private static List<Drive> drives(SimulationResult result, double[] t, ScanWindow w) {
         List<Drive> out = new ArrayList<>();
         Trace trace = result.trace();
         for (Element e : result.model().elements()) {
@@ -171,7 +172,6 @@ public final class OscillationScan {
             if (column < 0) {
                 continue;
             }
-            double[] t = trace.times();
             double[] speed = trace.series(column);
             double sum = 0.0;
             int n = 0;

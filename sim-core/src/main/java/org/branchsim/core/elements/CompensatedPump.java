@@ -179,13 +179,8 @@ public final class CompensatedPump implements Element, PeriodicDrive {
     }
 
     @Override
-    public int drivePeriodsPerTurn() {
-        return ripple == null ? 0 : ripple.periodsPerTurn();
-    }
-
-    @Override
-    public String driveDescription() {
-        return ripple == null ? "" : ripple.describe(id());
+    public KinematicRipple ripple() {
+        return ripple;
     }
 
     @Override

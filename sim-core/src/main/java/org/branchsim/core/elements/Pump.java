@@ -82,13 +82,8 @@ public final class Pump implements Element, PeriodicDrive {
     }
 
     @Override
-    public int drivePeriodsPerTurn() {
-        return ripple == null ? 0 : ripple.periodsPerTurn();
-    }
-
-    @Override
-    public String driveDescription() {
-        return ripple == null ? "" : ripple.describe(id());
+    public KinematicRipple ripple() {
+        return ripple;
     }
 
     @Override

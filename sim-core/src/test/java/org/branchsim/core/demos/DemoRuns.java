@@ -6,6 +6,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.scenario.ScenarioLoader;
+import org.branchsim.core.settings.Method;
 import org.branchsim.core.solve.Simulator;
 
 /** Runs each demo scenario once per test JVM and shares the result between test classes. */
@@ -22,6 +23,15 @@ final class DemoRuns {
 
     static Path scenario(String name) {
         return Path.of("..", "scenarios", name + ".json");
+    }
+
+    /**
+     * @return a fresh run of a demo, shortened to {@code end} s, with the given method and relative tolerance (not
+     *         shared: for comparing methods)
+     */
+    static SimulationResult run(String demo, double end, Method method, double rtol) {
+        Scenario s = ScenarioLoader.load(scenario(demo));
+        return Simulator.run(s.circuit(), s.solver().withEndTime(end).withMethod(method).withRelativeTolerance(rtol));
     }
 
     static Run of(String name) {

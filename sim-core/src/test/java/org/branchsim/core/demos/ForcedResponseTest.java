@@ -16,9 +16,9 @@ import org.junit.jupiter.api.Test;
 /**
  * The mobile-arm demo's pump is an axial-piston pump with 9 pistons at 1800 rpm. An odd piston count makes the
  * flow ripple repeat 2 z = 18 times a turn (Ivantysyn and Ivantysynova, Hydrostatic Pumps and Motors, 2001, kinematic
- * flow pulsation; from memory, as in docs/theory.md 6.1), so the ripple's fundamental is 18 x 1800 / 60 = 540 Hz. The oscillation the scan finds in the pump's
- * control chamber at that frequency is the ripple's forced response, not hunting; the other findings of the
- * run, at frequencies unrelated to the ripple, are not tied to it.
+ * flow pulsation; from memory, as in docs/theory.md 6.1), so the ripple's fundamental is 18 x 1800 / 60 = 540 Hz.
+ * The oscillation the scan finds in the pump's control chamber at that frequency is the ripple's forced response,
+ * not hunting; the other findings of the run, at frequencies unrelated to the ripple, are not tied to it.
  */
 class ForcedResponseTest {
 

@@ -7,10 +7,7 @@ import java.util.List;
 import org.branchsim.core.analysis.TraceComparison;
 import org.branchsim.core.results.EventRecord;
 import org.branchsim.core.results.SimulationResult;
-import org.branchsim.core.scenario.Scenario;
-import org.branchsim.core.scenario.ScenarioLoader;
 import org.branchsim.core.settings.Method;
-import org.branchsim.core.solve.Simulator;
 import org.branchsim.core.units.Dimension;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -32,16 +29,12 @@ class ImplicitAgreementTest {
      */
     private static final double EVENT_TIME_TOLERANCE = 1e-6;
 
-    private static SimulationResult run(String demo, double end, Method method, double rtol) {
-        Scenario s = ScenarioLoader.load(DemoRuns.scenario(demo));
-        return Simulator.run(s.circuit(), s.solver().withEndTime(end).withMethod(method).withRelativeTolerance(rtol));
-    }
 
     @ParameterizedTest
     @CsvSource({"feed-stall, 0.6", "fixture-clamp, 0.5", "regulation-characteristic, 1.5"})
     void implicitMatchesHighOrderReference(String demo, double end) {
-        SimulationResult implicit = run(demo, end, Method.IMPLICIT, RTOL);
-        SimulationResult reference = run(demo, end, Method.REFERENCE, REFERENCE_RTOL);
+        SimulationResult implicit = DemoRuns.run(demo, end, Method.IMPLICIT, RTOL);
+        SimulationResult reference = DemoRuns.run(demo, end, Method.REFERENCE, REFERENCE_RTOL);
         assertEquals(reference.trace().size(), implicit.trace().size());
         double error = TraceComparison.maxErrorOverRange(implicit.trace(), reference.trace(), Dimension.PRESSURE);
         assertTrue(error < ERROR_FACTOR * RTOL, demo + ": largest pressure error over range " + error);

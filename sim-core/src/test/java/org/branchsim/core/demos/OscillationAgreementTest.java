@@ -8,11 +8,7 @@ import java.util.List;
 import org.branchsim.core.analysis.OscillationFinding;
 import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.SignalOscillation;
-import org.branchsim.core.results.SimulationResult;
-import org.branchsim.core.scenario.Scenario;
-import org.branchsim.core.scenario.ScenarioLoader;
 import org.branchsim.core.settings.Method;
-import org.branchsim.core.solve.Simulator;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -30,16 +26,13 @@ class OscillationAgreementTest {
     private static final double RTOL = 1e-6;
     private static final double REFERENCE_RTOL = 1e-10;
 
-    private static SimulationResult run(String demo, double end, Method method, double rtol) {
-        Scenario s = ScenarioLoader.load(DemoRuns.scenario(demo));
-        return Simulator.run(s.circuit(), s.solver().withEndTime(end).withMethod(method).withRelativeTolerance(rtol));
-    }
 
     @ParameterizedTest
     @CsvSource({"gripper-chatter, 0.6", "pilot-supply-hunting, 0.8", "press-two-branches, 0.5"})
     void theOscillationsFoundAgreeWithTheReference(String demo, double end) {
-        List<OscillationFinding> implicit = OscillationScan.scan(run(demo, end, Method.IMPLICIT, RTOL));
-        List<OscillationFinding> reference = OscillationScan.scan(run(demo, end, Method.REFERENCE, REFERENCE_RTOL));
+        List<OscillationFinding> implicit = OscillationScan.scan(DemoRuns.run(demo, end, Method.IMPLICIT, RTOL));
+        List<OscillationFinding> reference =
+                OscillationScan.scan(DemoRuns.run(demo, end, Method.REFERENCE, REFERENCE_RTOL));
         assertFalse(reference.isEmpty(), demo + " oscillates");
         assertEquals(reference.size(), implicit.size(), "findings");
         for (int k = 0; k < reference.size(); k++) {
