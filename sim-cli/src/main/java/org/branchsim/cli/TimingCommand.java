@@ -74,6 +74,12 @@ public final class TimingCommand implements Callable<Integer> {
     @Option(names = "--no-reference", description = "Skip the accuracy check against Dormand-Prince 8(5,3) at rtol 1e-10.")
     private boolean noReference;
 
+    @Option(names = "--reference-spread",
+            description = "Also run the reference at rtol 1e-11 and report how far it is from the one at 1e-10 (largest "
+                    + "pressure difference over its range): the floor below which a pointwise error cannot be judged, "
+                    + "e.g. for a member chattering on its seat.")
+    private boolean referenceSpread;
+
     @Option(names = "--sweep-variants", paramLabel = "N", defaultValue = "64",
             description = "Variants in the sweep benchmark of the first scenario, 0 to skip (default ${DEFAULT-VALUE}).")
     private int sweepVariants;
@@ -94,6 +100,9 @@ public final class TimingCommand implements Callable<Integer> {
     @Option(names = "--scaling-valve", paramLabel = "ID", defaultValue = "reducer",
             description = "The reducing valve whose branch the scaling case copies (default ${DEFAULT-VALUE}).")
     private String scalingValve;
+
+    /** Relative tolerance of the second, tighter reference run of --reference-spread. */
+    static final double TIGHTER_REFERENCE_RTOL = 1e-11;
 
     /** Most copies of a branch in the scaling case. */
     static final int MAX_COPIES = 64;
@@ -172,7 +181,7 @@ public final class TimingCommand implements Callable<Integer> {
         ArrayNode results = root.putArray("results");
         StringBuilder csv = new StringBuilder("scenario,method,simulated_s,median_wall_s,min_wall_s,max_wall_s,"
                 + "median_cpu_s,min_cpu_s,max_cpu_s,simulated_per_wall,accepted_steps,rejected_steps,evaluations,jacobians,lu_factorisations,events,"
-                + "max_pressure_error_rel_range,event_time_max_diff_s,peak_heap_MB\n");
+                + "max_pressure_error_rel_range,event_time_max_diff_s,peak_heap_MB,reference_spread_rel_range\n");
         ThreadMXBean cpuClock = ManagementFactory.getThreadMXBean();
         boolean cpuTimed = cpuClock.isCurrentThreadCpuTimeSupported();
         if (cpuTimed && !cpuClock.isThreadCpuTimeEnabled()) {
@@ -192,6 +201,19 @@ public final class TimingCommand implements Callable<Integer> {
                             settings.withMethod(Method.REFERENCE).withRelativeTolerance(1e-10));
                 } catch (BranchsimException e) {
                     w.printf("%s: no reference (Dormand-Prince 8(5,3) at rtol 1e-10 failed: %s)%n", base.name(), e.getMessage());
+                }
+            }
+            double spread = Double.NaN;
+            if (reference != null && referenceSpread) {
+                try {
+                    SimulationResult tighter = Simulator.run(base.circuit(),
+                            settings.withMethod(Method.REFERENCE).withRelativeTolerance(TIGHTER_REFERENCE_RTOL));
+                    spread = TraceComparison.maxErrorOverRange(tighter.trace(), reference.trace(), Dimension.PRESSURE);
+                    w.printf(Locale.ROOT, "%s: references at rtol 1e-10 and 1e-11 differ by %.2g of a pressure's range%n",
+                            base.name(), spread);
+                } catch (BranchsimException e) {
+                    w.printf("%s: no reference spread (Dormand-Prince 8(5,3) at rtol 1e-11 failed: %s)%n", base.name(),
+                            e.getMessage());
                 }
             }
             for (Method m : methodList) {
@@ -245,14 +267,16 @@ public final class TimingCommand implements Callable<Integer> {
                 o.put("events", st.totalEvents());
                 MetricsReport.putFinite(o, "maxPressureErrorOverRange", err);
                 MetricsReport.putFinite(o, "eventTimeMaxDifference_s", eventDiff);
+                MetricsReport.putFinite(o, "referenceSpreadOverRange", spread);
                 o.put("peakHeap_MB", heap);
-                csv.append(String.format(Locale.ROOT, "%s,%s,%g,%.6f,%.6f,%.6f,%s,%s,%s,%.1f,%d,%d,%d,%d,%d,%d,%s,%s,%.1f%n",
+                csv.append(String.format(Locale.ROOT, "%s,%s,%g,%.6f,%.6f,%.6f,%s,%s,%s,%.1f,%d,%d,%d,%d,%d,%d,%s,%s,%.1f,%s%n",
                         base.name(), m.word(), s.endTime(), median, walls[0],
                         walls[walls.length - 1], seconds(cpuMedian), seconds(cpus[0]), seconds(cpus[cpus.length - 1]),
                         s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),
                         st.evaluations(), st.jacobians(), st.factorisations(), st.totalEvents(),
                         Double.isNaN(err) ? "" : String.format(Locale.ROOT, "%.3g", err),
-                        Double.isNaN(eventDiff) ? "" : String.format(Locale.ROOT, "%.3g", eventDiff), heap));
+                        Double.isNaN(eventDiff) ? "" : String.format(Locale.ROOT, "%.3g", eventDiff), heap,
+                        Double.isNaN(spread) ? "" : String.format(Locale.ROOT, "%.3g", spread)));
                 w.printf(Locale.ROOT, "%-18s %-9s %9.3g %9.4f %9.4f %9.4f %9.4f %8.4f %8.4f %8.1f %8d %8d %10d %8d %8d %7.2g %8.1f%n",
                         base.name(), m.word(), s.endTime(), median, walls[0],
                         walls[walls.length - 1], cpuMedian, cpus[0], cpus[cpus.length - 1], s.endTime() / median, st.acceptedSteps(), st.rejectedSteps(),

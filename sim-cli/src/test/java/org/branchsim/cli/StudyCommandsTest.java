@@ -95,6 +95,24 @@ class StudyCommandsTest {
         assertEquals(2, RunCommandTest.run("timing", "--methods", "quantum", FEED).code());
     }
 
+    /**
+     * The reference spread: two Dormand-Prince 8(5,3) runs at rtol 1e-10 and 1e-11 of a circuit without a sustained
+     * oscillation agree far inside the 1e-6 a default run is judged at (the method's error falls with its
+     * tolerance, Hairer, Norsett and Wanner, Solving ODEs I, 1993, sec. II.4), and the column is written.
+     */
+    @Test
+    void referenceSpreadIsReportedAndSmallOnACircuitThatSettles(@TempDir Path dir) throws IOException {
+        RunCommandTest.Outcome o = RunCommandTest.run("timing", "--runs", "1", "--warmup", "0", "--methods", "implicit",
+                "--end-time", "0.3 s", "--sweep-variants", "0", "--reference-spread", "--out", dir.toString(), FEED);
+        assertEquals(0, o.code(), o.err());
+        assertTrue(o.out().contains("feed-stall: references at rtol 1e-10 and 1e-11 differ by"), o.out());
+        List<String> csv = Files.readAllLines(dir.resolve("timing.csv"));
+        assertTrue(csv.get(0).endsWith(",reference_spread_rel_range"), csv.get(0));
+        String[] cells = csv.get(1).split(",", -1);
+        double spread = Double.parseDouble(cells[cells.length - 1]);
+        assertTrue(spread >= 0.0 && spread < 1e-7, csv.get(1));
+    }
+
     private static String[] concat(String[] a, String... b) {
         String[] out = new String[a.length + b.length];
         System.arraycopy(a, 0, out, 0, a.length);

@@ -122,6 +122,12 @@ public final class ScheduledInput {
      * @return the input's value at t, SI. At a step the value after the step is returned.
      */
     public double valueAt(double t) {
+        if (times.length == 0) {
+            return initial;
+        }
+        if (t >= times[times.length - 1]) {
+            return values[values.length - 1]; // after the last ramp (the common case in a long run)
+        }
         double result = initial;
         for (int i = 0; i < times.length; i += 2) {
             double t0 = times[i];

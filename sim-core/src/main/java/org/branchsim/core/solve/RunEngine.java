@@ -35,6 +35,8 @@ final class RunEngine {
     private final Map<StateSlot, Integer> positions;
     private JacobianWorkspace jacobianWork;
     private RecentPowers recentPowers;
+    private boolean onlyMarkedPoints;
+    private boolean solutionPointNext;
     private long evaluations;
 
     /** @param model the model to run; every member starts free, the impulse ledger empty */
@@ -79,12 +81,28 @@ final class RunEngine {
      */
     void derivatives(double t, double[] y, double[] yDot) {
         evaluations++;
-        model.evaluate(work, t, y, yDot, null, recentPowers == null ? null : recentPowers.next(t, y));
+        boolean record = recentPowers != null && (!onlyMarkedPoints || solutionPointNext);
+        solutionPointNext = false;
+        model.evaluate(work, t, y, yDot, null, record ? recentPowers.next(t, y) : null);
+    }
+
+    /**
+     * From now on remembers the powers of marked evaluations only (see {@link #markSolutionPoint}): for an
+     * integrator that marks every evaluation on its solution, the powers of its stages are never asked for.
+     */
+    void rememberMarkedPointsOnly() {
+        onlyMarkedPoints = true;
+    }
+
+    /** The next derivative evaluation is at a point of the solution: its powers are remembered. */
+    void markSolutionPoint() {
+        solutionPointNext = true;
     }
 
     /**
      * From now on remembers the energy accounts' powers of the latest derivative evaluations (see
-     * {@link #powersAt}); costs a copy of the state per evaluation.
+     * {@link #powersAt}; all of them, or the marked ones after {@link #rememberMarkedPointsOnly}); costs a copy
+     * of the state per evaluation remembered.
      */
     void rememberPowers() {
         if (recentPowers == null) {

@@ -94,6 +94,8 @@ public final class Simulator {
             RosenbrockIntegrator rosenbrock = (RosenbrockIntegrator) integrator;
             rosenbrock.setKnownTimes(known.times(), known::landed);
             rosenbrock.setStepListener(checkTimes::inspect);
+            rosenbrock.setSolutionPointMarker(engine::markSolutionPoint);
+            engine.rememberMarkedPointsOnly();
         }
         GridSampler sampler = new GridSampler(engine, trace, settings.outputInterval(), settings.endTime(), reporter);
         EnergyQuadrature quadrature = new EnergyQuadrature(engine);

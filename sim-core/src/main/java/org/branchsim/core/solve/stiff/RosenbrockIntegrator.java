@@ -59,6 +59,13 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     private JacobianSource jacobianSource;
     private StepMatrixSolver linearSolver;
     private java.util.function.Consumer<ODEStateInterpolator> stepListener = step -> { };
+    private Runnable solutionPointMarker = () -> { };
+    /** The equations when they write dy/dt in place and are integrated alone, else null (set per integration). */
+    private DerivativesInto inPlace;
+    /** Where {@link #inPlace} writes a stage's derivative. */
+    private double[] stageDerivative;
+    /** True while q2, q3 of integrate hold the dense-output combinations of the step last tried. */
+    private boolean combinationsReady;
     private long accepted;
     private long rejected;
     private long jacobians;
@@ -159,6 +166,16 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     }
 
     /**
+     * Calls {@code marker} just before each evaluation of the equations at a point of the solution itself (the
+     * interior error check on the dense output and the derivative at a step's end), not before the stages'
+     * evaluations, whose arguments are intermediate values. A listener that needs quantities of the solution
+     * (e.g. the energy accounts' powers) can then record only those evaluations. Null removes the marker.
+     */
+    public void setSolutionPointMarker(Runnable marker) {
+        this.solutionPointMarker = marker == null ? () -> { } : marker;
+    }
+
+    /**
      * Solves the stages' linear systems with {@code solver} (sized for this integrator's equations) instead of
      * dense LU; null restores dense LU.
      */
@@ -209,6 +226,8 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
             throw new MathIllegalArgumentException(org.hipparchus.exception.LocalizedCoreFormats.DIMENSIONS_MISMATCH, pattern.dimension(), n);
         }
         int stages = scheme.stages();
+        inPlace = mapper.getNumberOfEquations() == 1 && equations.getPrimary() instanceof DerivativesInto d ? d : null;
+        stageDerivative = new double[n];
         double[][] jac = new double[n][n];
         double[] ft = new double[n];
         StepMatrixSolver lu = linearSolver != null ? linearSolver : new DenseLu(n);
@@ -269,8 +288,10 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
                 factorisations++;
                 if (ok) {
                     error = stages(t, stageEnd, y, f0, ft, h, lu, u, yStage, y1);
+                    combinationsReady = false;
                     if (error <= 1.0 && interiorControl && scheme.dense() == RosenbrockScheme.DenseOutput.STAGES) {
                         denseCombinations(u, q2, q3);
+                        combinationsReady = true;
                         error = FastMath.max(error, interiorError(t, h, y, y1, q2, q3, lu, yStage));
                     }
                 } else {
@@ -291,12 +312,14 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
                 h = getStepSizeHelper().filterStep(h * factor, true, false);
             }
             boolean landing = tEnd == next && next < finalTime;
+            solutionPointMarker.run();
             double[] f1 = computeDerivatives(landing ? FastMath.nextDown(tEnd) : tEnd, y1);
             ODEStateAndDerivative end = mapper.mapStateAndDerivative(tEnd, y1, f1);
             accepted++;
             jacobianAge++;
             jacobianFresh = false;
-            AbstractODEStateInterpolator dense = interpolator(start, end, u, mapper);
+            AbstractODEStateInterpolator dense = interpolator(start, end, u, combinationsReady ? q2 : null,
+                    combinationsReady ? q3 : null, mapper);
             stepListener.accept(dense);
             setStepStart(acceptStep(dense, finalTime));
             boolean reset = resetOccurred();
@@ -347,13 +370,23 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         return mapper.mapStateAndDerivative(time, y, computeDerivatives(time, y));
     }
 
-    /** @return the step's dense output (its own arrays: the stage buffers are reused by the next step) */
+    /**
+     * @param q2 the dense output's stage combinations of this step when already formed (copied), else null
+     * @return the step's dense output (its own arrays: the stage buffers are reused by the next step)
+     */
     private AbstractODEStateInterpolator interpolator(ODEStateAndDerivative start, ODEStateAndDerivative end,
-                                                      double[][] u, EquationsMapper mapper) {
+                                                      double[][] u, double[] q2, double[] q3, EquationsMapper mapper) {
         if (scheme.dense() == RosenbrockScheme.DenseOutput.STAGES) {
-            double[] d2 = new double[u[0].length];
-            double[] d3 = new double[u[0].length];
-            denseCombinations(u, d2, d3);
+            double[] d2;
+            double[] d3;
+            if (q2 != null) {
+                d2 = q2.clone();
+                d3 = q3.clone();
+            } else {
+                d2 = new double[u[0].length];
+                d3 = new double[u[0].length];
+                denseCombinations(u, d2, d3);
+            }
             return new StageInterpolator(start, end, d2, d3, mapper);
         }
         return new HermiteInterpolator(true, start, end, start, end, mapper);
@@ -389,6 +422,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
         for (int i = 0; i < n; i++) {
             work[i] = (2.0 * y0[i] + y1[i]) / 3.0 + 2.0 * q2[i] / 9.0 + 2.0 * q3[i] / 27.0;
         }
+        solutionPointMarker.run();
         double[] fm = stageDerivatives(t + h / 3.0, work);
         if (fm == null) {
             return Double.NaN;
@@ -481,13 +515,19 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
 
     /**
      * @return f at a stage state, or null when the stage state is not finite (the step is then rejected and
-     *         retried smaller instead of failing the run)
+     *         retried smaller instead of failing the run); with equations that write in place, a buffer
+     *         overwritten by the next call
      */
     private double[] stageDerivatives(double t, double[] yStage) {
         if (!finite(yStage)) {
             return null;
         }
-        return computeDerivatives(t, yStage);
+        if (inPlace == null) {
+            return computeDerivatives(t, yStage);
+        }
+        incrementEvaluations(1);
+        inPlace.derivatives(t, yStage, stageDerivative);
+        return stageDerivative;
     }
 
     private static boolean finite(double[] v) {
