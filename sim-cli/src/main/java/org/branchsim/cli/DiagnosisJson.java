@@ -126,6 +126,13 @@ final class DiagnosisJson {
                 : d.finding().mode().mode().verdict(margin).name().toLowerCase(java.util.Locale.ROOT));
         ArrayNode other = o.putArray("otherModesBelowMargin");
         d.otherLowModes().forEach(m -> other.add(mode(m)));
+        o.put("forcedResponse", d.forced());
+        if (d.resonance() != null) {
+            ObjectNode res = o.putObject("nearestModeToDrive");
+            res.set("mode", mode(d.resonance().mode()));
+            res.put("frequencyRatio", MetricsReport.round(d.resonance().ratio()));
+            res.put("magnification", MetricsReport.round(d.resonance().magnification()));
+        }
         ArrayNode changes = o.putArray("changes");
         for (StabilitySearch.Outcome l : d.linear()) {
             ObjectNode c = changes.addObject();

@@ -9,6 +9,7 @@ import org.branchsim.core.analysis.ScanWindow;
 import org.branchsim.core.analysis.SignalOscillation;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.study.Diagnosis;
+import org.branchsim.core.study.DriveResonance;
 import org.branchsim.core.study.StabilitySearch;
 import org.branchsim.core.units.Dimension;
 import org.branchsim.core.units.Unit;
@@ -145,6 +146,27 @@ final class DiagnosisText {
         return sb.toString();
     }
 
+    /** What can and cannot be done about a forced response, with the resonance that sizes it. */
+    private static void forcedBody(StringBuilder sb, Diagnosis.FindingDiagnosis d, double margin) {
+        sb.append("  No remedy is searched: a forced response lasts as long as its source runs and no change of damping")
+                .append(" removes it; its size is set by the source and by how near a mode of the circuit lies to the")
+                .append(" drive frequency.").append(NL);
+        DriveResonance r = d.resonance();
+        if (r == null) {
+            sb.append("  No oscillatory mode is known here").append(d.operatingPoint() == null
+                    ? " (no operating point; --on-trajectory lists modes about the simulated state)" : "")
+                    .append(", so the drive's magnification cannot be given.").append(NL);
+        } else {
+            sb.append("  Nearest mode to the drive: ").append(mode(r.mode(), margin)).append('.').append(NL);
+            sb.append(String.format(Locale.ROOT, "  Drive at %.2f times that mode's frequency: a single mode magnifies it %.2f "
+                    + "times (M = 1/sqrt((1 - r^2)^2 + (2 zeta r)^2); 1 far below the mode, 1/(2 zeta) on it).%n",
+                    r.ratio(), r.magnification()));
+        }
+        sb.append("  To make it smaller: less ripple at the source (more pistons, a pulsation damper at the pump")
+                .append(" outlet), or move the nearest mode away from the drive frequency (line length and volume, the")
+                .append(" stiffness or mass of the part that moves).").append(NL);
+    }
+
     private static void findingBody(StringBuilder sb, Diagnosis.FindingDiagnosis d, double margin, UnitSystem u) {
         if (d.operatingPoint() != null) {
             sb.append(String.format(Locale.ROOT, "  Operating point at %.4g s: residual %.2g 1/s (largest in %s)%s.%n",
@@ -168,6 +190,10 @@ final class DiagnosisText {
         for (Mode m : d.otherLowModes()) {
             sb.append("  Note: a mode not involved in this oscillation is below the margin already: ")
                     .append(mode(m, margin)).append('.').append(NL);
+        }
+        if (d.forced()) {
+            forcedBody(sb, d, margin);
+            return;
         }
         if (d.operatingPoint() == null) {
             sb.append("  Changes cannot be judged with a margin without an operating point.").append(NL);

@@ -30,7 +30,7 @@ import org.jfree.data.xy.XYSeriesCollection;
 /**
  * The landing of a reducing valve, zoomed on the event: the outlet pressure over a window from shortly before its
  * rise through {@link ReducingValveMetrics#RISE_FRACTION} of the setting to well after it settles (or around the
- * peak when it did not rise in the window), with the setting drawn as a line, the settling band of
+ * peak when it did not rise in the window; the whole run when it neither rose nor settled), with the setting drawn as a line, the settling band of
  * +-{@link ReducingValveMetrics#BAND} of the setting shaded about it, the peak marked with its value and time and
  * the settling time marked; below, the spool travel (0 = fully open, the full stroke = closed) and the pilot lift
  * (0 = seated). Pressures and lengths in the display units of the unit system, time in s.
@@ -73,6 +73,9 @@ public final class LandingChart {
         double[] t = trace.times();
         double first = t[0];
         double last = t[t.length - 1];
+        if (!Double.isFinite(m.riseTime()) && !m.settled() && !m.oscillating()) {
+            return new double[] {first, last}; // no landing to zoom on: the whole run shows why it never settled
+        }
         double start;
         double end;
         if (Double.isFinite(m.riseTime())) {
@@ -132,8 +135,10 @@ public final class LandingChart {
                     m.oscillationFrequency());
         }
         if (!m.settled()) {
-            return String.format(Locale.ROOT, "not inside +-%.0f %% of the setting at the end of the metrics window",
-                    100 * ReducingValveMetrics.BAND);
+            return String.format(Locale.ROOT, "not inside +-%.0f %% of the setting at the end of the metrics window%s",
+                    100 * ReducingValveMetrics.BAND, Double.isFinite(m.riseTime()) ? ""
+                            : String.format(Locale.ROOT, " (no rise through %.0f %% of it: the whole run is shown)",
+                            100 * ReducingValveMetrics.RISE_FRACTION));
         }
         if (Double.isNaN(m.settlingTime())) {
             return String.format(Locale.ROOT, "inside +-%.0f %% of the setting from %.3f s (no rise through %.0f %% "

@@ -150,11 +150,24 @@ class LandingChartTest {
     @Test
     void withoutARiseTheWindowCentresOnThePeak() {
         ReducingValveMetrics m = metrics();
+        // inside the band from the start (no rise to find): the largest excursion is what there is to see
         ReducingValveMetrics noRise = new ReducingValveMetrics("prv", SETTING, m.peak(), m.peakTime(), SETTING,
-                m.overshoot(), 0.0, Double.NaN, Double.NaN, Double.NaN, false, Double.NaN, 0.0, 0.0, 0.0);
+                m.overshoot(), 0.0, Double.NaN, 0.0, Double.NaN, true, Double.NaN, 0.0, 0.0, 0.0);
         double[] w = LandingChart.window(trace(), noRise);
         assertEquals(m.peakTime(), 0.5 * (w[0] + w[1]), 1e-9);
         assertEquals(2 * LandingChart.PEAK_HALF_WIDTH * END, w[1] - w[0], 1e-9);
+    }
+
+    @Test
+    void withoutARiseOrSettlingTheWholeRunIsShownAndSaidSo() {
+        ReducingValveMetrics m = metrics();
+        ReducingValveMetrics neither = new ReducingValveMetrics("prv", SETTING, m.peak(), m.peakTime(), SETTING,
+                m.overshoot(), 0.0, Double.NaN, Double.NaN, Double.NaN, false, Double.NaN, 0.0, 0.0, 0.0);
+        double[] t = trace().times();
+        double[] w = LandingChart.window(trace(), neither);
+        assertEquals(t[0], w[0], 0.0);
+        assertEquals(t[t.length - 1], w[1], 0.0);
+        assertTrue(LandingChart.verdict(neither).contains("the whole run is shown"), LandingChart.verdict(neither));
     }
 
     @Test

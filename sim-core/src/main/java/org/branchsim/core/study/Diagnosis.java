@@ -85,10 +85,19 @@ public final class Diagnosis {
      * @param linear the linear search of every knob and direction
      * @param trials the time-domain runs of the values with margin
      * @param recommended the cure that costs the job least (null when none cures)
+     * @param resonance for a forced response, the mode nearest its drive and the drive's magnification there (null
+     *        otherwise, or when no oscillatory mode is known); a forced response gets no remedy search, since damping
+     *        does not remove it
      */
     public record FindingDiagnosis(OscillationFinding finding, OperatingPoint operatingPoint, String noOperatingPoint,
                                    boolean linearisedOnTrajectory, List<Mode> modes, List<Mode> otherLowModes,
-                                   List<StabilitySearch.Outcome> linear, List<Trial> trials, Trial recommended) {
+                                   List<StabilitySearch.Outcome> linear, List<Trial> trials, Trial recommended,
+                                   DriveResonance resonance) {
+
+        /** @return true when the finding is driven from outside (a pump's ripple) rather than self-sustained */
+        public boolean forced() {
+            return finding.drivenBy() != null;
+        }
     }
 
     /**
@@ -174,8 +183,14 @@ public final class Diagnosis {
                 otherLow.add(m);
             }
         }
+        if (f.drivenBy() != null) {
+            // a forced response lasts while its source runs: no damping change removes it, so no remedy is searched
+            return new FindingDiagnosis(named, op, noOp, onTrajectory, modes, otherLow, List.of(), List.of(), null,
+                    DriveResonance.nearest(f.frequency(), modes));
+        }
         if (op == null) {
-            return new FindingDiagnosis(named, null, noOp, onTrajectory, modes, otherLow, List.of(), List.of(), null);
+            return new FindingDiagnosis(named, null, noOp, onTrajectory, modes, otherLow, List.of(), List.of(), null,
+                    null);
         }
         List<RemedyKnob> knobs = RemedyCatalogue.knobs(scenario.document(), scenario.circuit(), parts);
         StabilitySearch search = new StabilitySearch(scenario, op, parts, options.margin());
@@ -185,7 +200,7 @@ public final class Diagnosis {
         }
         List<Trial> trials = trials(scenario, options, windows, baselineFindings, parts, linear, progress);
         Trial best = trials.stream().filter(Trial::cures).min(Comparator.comparingDouble(Trial::cost)).orElse(null);
-        return new FindingDiagnosis(named, op, null, false, modes, otherLow, linear, trials, best);
+        return new FindingDiagnosis(named, op, null, false, modes, otherLow, linear, trials, best, null);
     }
 
     private static List<Trial> trials(Scenario scenario, Options options, List<ScanWindow> windows,

@@ -11,6 +11,9 @@ import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.scenario.Scenario;
 import org.branchsim.core.scenario.ScenarioLoader;
 import org.branchsim.core.solve.Simulator;
+import org.branchsim.core.analysis.ScanWindow;
+import org.branchsim.core.study.Diagnosis;
+import org.branchsim.core.study.DriveResonance;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -44,5 +47,24 @@ class ForcedResponseTest {
                 assertNull(f.drivenBy(), f.frequency() + " Hz is not the ripple's");
             }
         }
+    }
+
+    /**
+     * A forced response is not diagnosed as an instability: no damping change can remove it, so no remedy is
+     * searched or run; the nearest mode to the drive and the drive's magnification there are given instead.
+     */
+    @Test
+    void theDiagnosisOfAForcedResponseSearchesNoRemedyAndNamesTheNearestMode() {
+        Scenario s = ScenarioLoader.load(DemoRuns.scenario("mobile-arm"));
+        Diagnosis.Report r = Diagnosis.run(s, new Diagnosis.Options(0.05, ScanWindow.given(1.1, 1.5), true, 1), n -> { });
+        Diagnosis.FindingDiagnosis forced = r.diagnosed().stream().filter(Diagnosis.FindingDiagnosis::forced)
+                .findFirst().orElse(null);
+        assertNotNull(forced, "the ripple's forced response is diagnosed: " + r.findings());
+        assertTrue(forced.linear().isEmpty() && forced.trials().isEmpty() && forced.recommended() == null);
+        DriveResonance res = forced.resonance();
+        assertNotNull(res, "modes about the trajectory are known (--on-trajectory)");
+        assertEquals(forced.finding().frequency() / res.mode().naturalFrequency(), res.ratio(), 1e-12);
+        assertEquals(DriveResonance.magnification(res.ratio(), Math.max(0.0, res.mode().dampingRatio())),
+                res.magnification(), 1e-12);
     }
 }
