@@ -72,7 +72,8 @@ public final class CircuitBuilder {
         }
         double[] y0 = l.initial.stream().mapToDouble(Double::doubleValue).toArray();
         return new CircuitModel(name, fluid, new ArrayList<>(nodes.values()), elements, l.states, y0, l.signals,
-                l.accounts, l.inputs, l.members, l.discontinuities, l.compression, l.tankAccounts, l.blocks);
+                l.accounts, l.inputs, l.elementInputs, l.members, l.discontinuities, l.compression, l.tankAccounts,
+                l.blocks);
     }
 
     private void requireUnbound() {
@@ -96,6 +97,8 @@ public final class CircuitBuilder {
         final List<SignalHandle> signals = new ArrayList<>();
         final List<EnergyAccount> accounts = new ArrayList<>();
         final List<ScheduledInput> inputs = new ArrayList<>();
+        /** The inputs each element registered, in element order. */
+        final List<List<ScheduledInput>> elementInputs = new ArrayList<>();
         final List<Member> members = new ArrayList<>();
         final List<Discontinuity> discontinuities = new ArrayList<>();
         final List<int[]> blocks = new ArrayList<>();
@@ -139,6 +142,8 @@ public final class CircuitBuilder {
                 }
             }
             List<int[]> declared = new ArrayList<>();
+            List<ScheduledInput> own = new ArrayList<>();
+            elementInputs.add(own);
             element.bind(new Binder() {
                 @Override
                 public Fluid fluid() {
@@ -171,6 +176,7 @@ public final class CircuitBuilder {
                 @Override
                 public void input(ScheduledInput input) {
                     inputs.add(input);
+                    own.add(input);
                 }
 
                 @Override

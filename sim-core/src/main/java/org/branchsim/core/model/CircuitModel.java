@@ -24,6 +24,8 @@ public final class CircuitModel {
     private final List<SignalHandle> signals;
     private final List<EnergyAccount> accounts;
     private final List<ScheduledInput> inputs;
+    /** Per element, the scheduled inputs it reads: its own and the pressures of the tanks at its ports. */
+    private final ScheduledInput[][] inputsRead;
     private final List<Member> members;
     private final List<Discontinuity> discontinuities;
     private final double[] initialState;
@@ -39,7 +41,8 @@ public final class CircuitModel {
 
     CircuitModel(String name, Fluid fluid, List<Node> nodes, List<Element> elements, List<StateSlot> states,
                  double[] initialState, List<SignalHandle> signals, List<EnergyAccount> accounts,
-                 List<ScheduledInput> inputs, List<Member> members, List<Discontinuity> discontinuities,
+                 List<ScheduledInput> inputs, List<List<ScheduledInput>> elementInputs, List<Member> members,
+                 List<Discontinuity> discontinuities,
                  EnergyAccount compressionAccount, EnergyAccount[] tankAccounts, List<int[]> couplings) {
         this.name = name;
         this.fluid = fluid;
@@ -50,6 +53,16 @@ public final class CircuitModel {
         this.signals = List.copyOf(signals);
         this.accounts = List.copyOf(accounts);
         this.inputs = List.copyOf(inputs);
+        this.inputsRead = new ScheduledInput[this.elements.length][];
+        for (int k = 0; k < this.elements.length; k++) {
+            List<ScheduledInput> read = new ArrayList<>(elementInputs.get(k));
+            for (Node port : this.elements[k].ports()) {
+                if (port.isTank() && !read.contains(port.tankPressure())) {
+                    read.add(port.tankPressure());
+                }
+            }
+            inputsRead[k] = read.toArray(new ScheduledInput[0]);
+        }
         this.members = List.copyOf(members);
         List<Discontinuity> all = new ArrayList<>(discontinuities);
         for (ScheduledInput in : this.inputs) {
@@ -280,6 +293,21 @@ public final class CircuitModel {
      *        unit of state j; every entry is written
      */
     public void jacobian(JacobianWorkspace w, double t, double[] y, double[][] jac) {
+        jacobian(w, t, y, jac, 0.0, null);
+    }
+
+    /**
+     * The Jacobian as {@link #jacobian(JacobianWorkspace, double, double[], double[][])} and, when {@code ft} is
+     * given, the partial derivative df/dt at (t, y) with the states held: only the elements reading a scheduled
+     * input that ramps at t (their own inputs, or the pressure of a tank at a port) depend on time, so only they
+     * are evaluated again at t + dt (a forward difference of their contributions, as a full difference of f would
+     * take, without evaluating the rest of the circuit), and a node's row is
+     * d(dp/dt)/dt = beta_e/V * dQ/dt - beta_e Q/V^2 * dV/dt (docs/theory.md section 10.1).
+     *
+     * @param dt time step of the forward difference, s (used when {@code ft} is given)
+     * @param ft output, df/dt in each state's SI unit per second squared (or null)
+     */
+    public void jacobian(JacobianWorkspace w, double t, double[] y, double[][] jac, double dt, double[] ft) {
         Evaluation e = w.collecting;
         e.resetForPartials(t, y, w.rates, jac, w.inflowPartials, w.volumePartials);
         for (Element element : elements) {
@@ -294,6 +322,14 @@ public final class CircuitModel {
         for (int k = 0; k < elements.length; k++) {
             if (!elements[k].suppliesPartials()) {
                 w.differences(elements[k], elementColumns[k], elementRows[k], t, y, jac);
+            }
+        }
+        if (ft != null) {
+            w.clearTimePartials(ft);
+            for (int k = 0; k < elements.length; k++) {
+                if (readsRampAt(k, t)) {
+                    w.timeDifference(elements[k], elementRows[k], t, dt, y, ft);
+                }
             }
         }
         for (Node n : nodes) {
@@ -315,7 +351,20 @@ public final class CircuitModel {
                 out[j] = betaOverV * dq[j] - volumeTerm * dv[j];
             }
             out[row] += fluid.bulkModulusSlope(p, n.wallBulkModulus()) / v * inflow;
+            if (ft != null) {
+                ft[row] = betaOverV * w.inflowRates[k] - volumeTerm * w.volumeRates[k];
+            }
         }
+    }
+
+    /** @return true when element k reads a scheduled input that ramps at t */
+    private boolean readsRampAt(int k, double t) {
+        for (ScheduledInput in : inputsRead[k]) {
+            if (in.rampingAt(t)) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**

@@ -31,6 +31,10 @@ public final class JacobianWorkspace {
     private final double[] perturbed;
     final double[][] inflowPartials;
     final double[][] volumePartials;
+    /** Per node, d(inflow)/dt with the states held, m^3/s^2 (filled by {@link #timeDifference}). */
+    final double[] inflowRates;
+    /** Per node, d(extra volume)/dt with the states held, m^3/s. */
+    final double[] volumeRates;
     private final double[] plusInflow;
     private final double[] plusVolume;
     private final double[] plusRates;
@@ -45,6 +49,8 @@ public final class JacobianWorkspace {
         perturbed = new double[n];
         inflowPartials = new double[nodes.length][n];
         volumePartials = new double[nodes.length][n];
+        inflowRates = new double[nodes.length];
+        volumeRates = new double[nodes.length];
         plusInflow = new double[nodes.length];
         plusVolume = new double[nodes.length];
         plusRates = new double[n];
@@ -93,6 +99,46 @@ public final class JacobianWorkspace {
             for (int r : rows) {
                 jac[r][j] = (plusRates[r] - singleRates[r]) / twoH;
             }
+        }
+    }
+
+    /** Zeroes the time partials before {@link #timeDifference} adds to them. */
+    void clearTimePartials(double[] ft) {
+        java.util.Arrays.fill(ft, 0.0);
+        java.util.Arrays.fill(inflowRates, 0.0);
+        java.util.Arrays.fill(volumeRates, 0.0);
+    }
+
+    /**
+     * The forward difference in time of one element's contributions at fixed states: the element alone is
+     * evaluated at t + dt and at t; its inflow and extra volume per node are added to the node sums and its own
+     * states' rates written into {@code ft}.
+     *
+     * @param element the element (it reads an input that ramps at t)
+     * @param rows its own states
+     * @param t time, s
+     * @param dt step, s
+     * @param y state, SI (not changed)
+     * @param ft output rows of the element's own states, SI per second squared
+     */
+    void timeDifference(Element element, int[] rows, double t, double dt, double[] y, double[] ft) {
+        int nodeCount = plusInflow.length;
+        System.arraycopy(y, 0, perturbed, 0, y.length);
+        evaluateSingle(element, t + dt);
+        for (int k = 0; k < nodeCount; k++) {
+            plusInflow[k] = single.inflowOf(k);
+            plusVolume[k] = single.extraVolumeOf(k);
+        }
+        for (int r : rows) {
+            plusRates[r] = singleRates[r];
+        }
+        evaluateSingle(element, t);
+        for (int k = 0; k < nodeCount; k++) {
+            inflowRates[k] += (plusInflow[k] - single.inflowOf(k)) / dt;
+            volumeRates[k] += (plusVolume[k] - single.extraVolumeOf(k)) / dt;
+        }
+        for (int r : rows) {
+            ft[r] = (plusRates[r] - singleRates[r]) / dt;
         }
     }
 

@@ -25,4 +25,11 @@ final class ElementJacobian implements JacobianSource {
     public void jacobian(double t, double[] y, double[] f0, double[][] jac) {
         engine.jacobian(t, y, jac);
     }
+
+    /** The time derivative from the elements that read a ramping input only (CircuitModel#jacobian). */
+    @Override
+    public boolean jacobianAndTimeDerivative(double t, double[] y, double[] f0, double[][] jac, double dt, double[] ft) {
+        engine.jacobian(t, y, jac, dt, ft);
+        return true;
+    }
 }

@@ -142,6 +142,18 @@ final class RunEngine {
         model.jacobian(jacobianWork, t, y, jac);
     }
 
+    /**
+     * The Jacobian as {@link #jacobian(double, double[], double[][])} and df/dt at (t, y) by a forward difference
+     * of step dt of the elements that read a ramping input ({@link CircuitModel#jacobian}); not counted as an
+     * evaluation of the equations.
+     */
+    void jacobian(double t, double[] y, double[][] jac, double dt, double[] ft) {
+        if (jacobianWork == null) {
+            jacobianWork = model.jacobianWorkspace(modes, impulses);
+        }
+        model.jacobian(jacobianWork, t, y, jac, dt, ft);
+    }
+
     /** @return the values of all signals at (t, y), SI, in the model's signal order */
     double[] sampleSignals(double t, double[] y) {
         double[] out = new double[model.signals().size()];

@@ -17,4 +17,17 @@ public interface JacobianSource {
      * @param jac output, n x n
      */
     void jacobian(double t, double[] y, double[] f0, double[][] jac);
+
+    /**
+     * Fills the Jacobian as {@link #jacobian} and, if the source can, the time derivative df/dt at (t, y) by its
+     * own means (e.g. differencing only the parts of f that depend on time).
+     *
+     * @param dt step of a forward difference in time, s
+     * @param ft output, df/dt, SI per second squared
+     * @return true when {@code ft} was filled; false leaves it to the integrator (a difference of the whole f)
+     */
+    default boolean jacobianAndTimeDerivative(double t, double[] y, double[] f0, double[][] jac, double dt, double[] ft) {
+        jacobian(t, y, f0, jac);
+        return false;
+    }
 }

@@ -556,8 +556,15 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
     private void estimateJacobian(DifferenceJacobian differences, double t, double[] y, double[] f0, double h,
                                   double[][] jac, double[] ft) {
         int n = y.length;
+        boolean timeDependentHere = timeDependent.test(t);
+        double dt = SQRT_EPS * FastMath.max(FastMath.abs(t), FastMath.abs(h));
+        boolean ftFilled = false;
         if (jacobianSource != null) {
-            jacobianSource.jacobian(t, y, f0, jac);
+            if (timeDependentHere) {
+                ftFilled = jacobianSource.jacobianAndTimeDerivative(t, y, f0, jac, dt, ft);
+            } else {
+                jacobianSource.jacobian(t, y, f0, jac);
+            }
         } else {
             differences.estimate(yp -> computeDerivatives(t, yp), y, f0, (j, quotient) -> {
                 java.util.BitSet rows = pattern.rows(j);
@@ -569,8 +576,9 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
                 }
             });
         }
-        if (timeDependent.test(t)) {
-            double dt = SQRT_EPS * FastMath.max(FastMath.abs(t), FastMath.abs(h));
+        if (ftFilled) {
+            // the source differenced only what depends on time
+        } else if (timeDependentHere) {
             double[] fT = computeDerivatives(t + dt, y);
             for (int i = 0; i < n; i++) {
                 ft[i] = (fT[i] - f0[i]) / dt;
