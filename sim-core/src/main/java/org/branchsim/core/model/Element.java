@@ -24,7 +24,9 @@ public interface Element {
 
     /**
      * Adds this element's flows and volumes to its nodes, sets its state derivatives and, when the
-     * evaluation records, its signals and powers.
+     * evaluation records, its signals and powers. Time enters only through the scheduled inputs the element
+     * declared when bound and the pressures of tanks at its ports: the model's time derivative df/dt differences
+     * only the elements reading an input that ramps (CircuitModel#jacobian).
      */
     void evaluate(Evaluation evaluation);
 
