@@ -137,8 +137,8 @@ public final class LandingChart {
         if (!m.settled()) {
             return String.format(Locale.ROOT, "not inside +-%.0f %% of the setting at the end of the metrics window%s",
                     100 * ReducingValveMetrics.BAND, Double.isFinite(m.riseTime()) ? ""
-                            : String.format(Locale.ROOT, " (no rise through %.0f %% of it: the whole run is shown)",
-                            100 * ReducingValveMetrics.RISE_FRACTION));
+                            : String.format(Locale.ROOT, " (no rise through %.0f %% of it in the metrics window: "
+                            + "the whole run is shown)", 100 * ReducingValveMetrics.RISE_FRACTION));
         }
         if (Double.isNaN(m.settlingTime())) {
             return String.format(Locale.ROOT, "inside +-%.0f %% of the setting from %.3f s (no rise through %.0f %% "
