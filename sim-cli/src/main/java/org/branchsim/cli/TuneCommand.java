@@ -143,6 +143,10 @@ public final class TuneCommand implements Callable<Integer> {
 
     /** @return a metric value in its display unit, with the unit */
     static String show(Scenario s, Spec spec, double v) {
+        if (spec.metric().plainNumber()) {
+            return Double.isNaN(v) ? "undefined (no operating point at the end of the metrics window)"
+                    : String.format(Locale.ROOT, "%.4f", v);
+        }
         if (!Double.isFinite(v)) {
             return v > 0 ? "undefined (never settled or failed)" : "-";
         }
@@ -157,6 +161,9 @@ public final class TuneCommand implements Callable<Integer> {
     private static String showMargin(Scenario s, Spec spec, double margin) {
         if (!Double.isFinite(margin)) {
             return "-";
+        }
+        if (spec.metric().plainNumber()) {
+            return String.format(Locale.ROOT, "%+.4f", margin);
         }
         Dimension d = spec.metric().dimension();
         if (d == null) {
@@ -223,8 +230,9 @@ public final class TuneCommand implements Callable<Integer> {
             sb.append(',').append(StudyTable.field(f.path() + (f.unit().isEmpty() ? "" : " [" + f.unit() + "]")));
         }
         for (Spec sp : sf.specs()) {
-            sb.append(',').append(StudyTable.field(sp.metric().key() + (sp.metric().dimension() == null ? " [%]"
-                    : " [" + sp.metric().dimension().siSymbol() + "]")));
+            String unit = sp.metric().plainNumber() ? " [-]" : sp.metric().dimension() == null ? " [%]"
+                    : " [" + sp.metric().dimension().siSymbol() + "]";
+            sb.append(',').append(StudyTable.field(sp.metric().key() + unit));
         }
         sb.append(",objective,meets_every_spec,binding_spec,error\n");
         int rank = 0;

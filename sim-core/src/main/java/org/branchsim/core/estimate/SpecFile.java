@@ -80,7 +80,7 @@ public record SpecFile(String valve, List<Spec> specs, List<FreeParameter> free,
         if (metric == null) {
             Located at = o.get("metric");
             throw new BranchsimException(ErrorKey.SPEC_INVALID, file, at.line(), at.column(), "metric",
-                    "overshoot, deviation, settlingTime, peak or drainFlow", "\"" + name + "\"");
+                    "overshoot, deviation, settlingTime, peak, drainFlow or dampingRatio", "\"" + name + "\"");
         }
         boolean max = o.get("max") != null;
         if (max == (o.get("min") != null)) {
@@ -91,7 +91,13 @@ public record SpecFile(String valve, List<Spec> specs, List<FreeParameter> free,
         String written = text(file, o, key, true);
         Located at = o.get(key);
         double limit;
-        if (metric.dimension() == null) {
+        if (metric.plainNumber()) {
+            limit = parse(written.strip());
+            if (!(limit > -1.0 && limit < 1.0)) {
+                throw new BranchsimException(ErrorKey.SPEC_INVALID, file, at.line(), at.column(), metric.key() + "." + key,
+                        "a damping ratio, a plain number between -1 and 1 such as \"0.1\"", "\"" + written + "\"");
+            }
+        } else if (metric.dimension() == null) {
             String s = written.strip();
             limit = s.endsWith("%") ? parse(s.substring(0, s.length() - 1)) : Double.NaN;
             if (Double.isNaN(limit)) {

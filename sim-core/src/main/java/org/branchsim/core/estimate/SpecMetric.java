@@ -18,7 +18,12 @@ public enum SpecMetric {
     /** Peak outlet pressure, Pa. */
     PEAK("peak", Dimension.PRESSURE),
     /** Steady pilot drain flow, m^3/s. */
-    DRAIN_FLOW("drainFlow", Dimension.VOLUME_FLOW);
+    DRAIN_FLOW("drainFlow", Dimension.VOLUME_FLOW),
+    /**
+     * Smallest damping ratio of the linearised circuit's modes in which the valve's parts take part (dimensionless),
+     * at the operating point at the end of the metrics window ({@link org.branchsim.core.study.ValveDamping}).
+     */
+    DAMPING_RATIO("dampingRatio", null);
 
     private final String key;
     private final Dimension dimension;
@@ -33,19 +38,38 @@ public enum SpecMetric {
         return key;
     }
 
-    /** @return the dimension of its limit, or null for a percentage of the setting */
+    /** @return the dimension of its limit, or null for a percentage of the setting or a plain number */
     public Dimension dimension() {
         return dimension;
     }
 
-    /** @return the metric's value for a valve: SI, or % for percentages; +infinity when undefined */
-    public double of(ReducingValveMetrics m) {
+    /** @return true when the limit is a plain number (a damping ratio), not a percentage or a quantity */
+    public boolean plainNumber() {
+        return this == DAMPING_RATIO;
+    }
+
+    /** @return true when the metric needs the modes at the operating point, not only the run's metrics */
+    public boolean needsModes() {
+        return this == DAMPING_RATIO;
+    }
+
+    /**
+     * @param m the valve's metrics over the run
+     * @param dampingRatio the valve's damping ratio ({@link #DAMPING_RATIO}; NaN when there is no operating point)
+     * @return the metric's value for a valve: SI, % for percentages, a plain number for a damping ratio; +infinity
+     *         when undefined (a damping ratio that is undefined stays NaN, which violates any limit)
+     */
+    public double of(ReducingValveMetrics m, double dampingRatio) {
+        if (this == DAMPING_RATIO) {
+            return dampingRatio;
+        }
         double v = switch (this) {
             case OVERSHOOT -> m.overshootPercent();
             case DEVIATION -> Math.abs(m.deviationPercent());
             case SETTLING_TIME -> m.settled() ? m.settlingTime() : Double.POSITIVE_INFINITY;
             case PEAK -> m.peak();
             case DRAIN_FLOW -> m.drainFlow();
+            case DAMPING_RATIO -> dampingRatio;
         };
         return Double.isNaN(v) ? Double.POSITIVE_INFINITY : v;
     }

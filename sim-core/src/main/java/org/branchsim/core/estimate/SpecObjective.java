@@ -10,6 +10,7 @@ import org.branchsim.core.analysis.OscillationScan;
 import org.branchsim.core.analysis.ReducingValveMetrics;
 import org.branchsim.core.scenario.Located;
 import org.branchsim.core.study.StudyRunner;
+import org.branchsim.core.study.ValveDamping;
 import org.branchsim.core.study.Variant;
 import org.branchsim.core.study.VariantOutcome;
 
@@ -103,9 +104,14 @@ public final class SpecObjective {
         if (m == null) {
             return DesignEvaluation.failed(spec.specs().size(), "no reducing valve \"" + spec.valve() + "\"");
         }
+        double damping = Double.NaN;
+        if (spec.specs().stream().anyMatch(sp -> sp.metric().needsModes())) {
+            damping = ValveDamping.of(o.scenario().circuit(), o.result(), o.scenario().metricsFrom(),
+                    o.scenario().metricsTo(), spec.valve());
+        }
         double[] values = new double[spec.specs().size()];
         for (int i = 0; i < values.length; i++) {
-            values[i] = spec.specs().get(i).metric().of(m);
+            values[i] = spec.specs().get(i).metric().of(m, damping);
         }
         return DesignEvaluation.of(spec.specs(), values);
     }

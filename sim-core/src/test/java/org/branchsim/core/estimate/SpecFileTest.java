@@ -57,4 +57,21 @@ class SpecFileTest {
         assertEquals(0, bad.binding());
         assertFalse(bad.feasible());
     }
+
+    @Test
+    void aDampingRatioIsAPlainNumberAndAnUndefinedOneFailsItsSpec() {
+        SpecFile s = SpecFile.read("s.json", "{\"valve\": \"v\", \"specs\": [{\"metric\": \"dampingRatio\", \"min\": 0.1}],"
+                + " \"free\": [{\"path\": \"elements.v.mass\", \"low\": \"1 g\", \"high\": \"2 g\"}]}");
+        Spec d = s.specs().get(0);
+        assertSame(SpecMetric.DAMPING_RATIO, d.metric());
+        assertFalse(d.maximum());
+        assertEquals(0.1, d.limit(), 0.0);
+        assertEquals(-0.5, d.violation(0.15), 1e-12, "met with a margin of half the limit");
+        assertEquals(Double.POSITIVE_INFINITY, d.violation(Double.NaN), "no operating point: the spec fails");
+        for (String bad : new String[] {"\"0.1 %\"", "2", "\"high\""}) {
+            BranchsimException e = assertThrows(BranchsimException.class, () -> SpecFile.read("s.json",
+                    "{\"valve\": \"v\",\n \"specs\": [{\"metric\": \"dampingRatio\", \"min\": " + bad + "}], \"free\": []}"));
+            assertTrue(e.getMessage().startsWith("s.json:2:") && e.getMessage().contains("damping ratio"), e.getMessage());
+        }
+    }
 }
