@@ -136,16 +136,13 @@ final class RunEngine {
      * @param jac output, n x n, every entry written
      */
     void jacobian(double t, double[] y, double[][] jac) {
-        if (jacobianWork == null) {
-            jacobianWork = model.jacobianWorkspace(modes, impulses);
-        }
-        model.jacobian(jacobianWork, t, y, jac);
+        jacobian(t, y, jac, 0.0, null);
     }
 
     /**
      * The Jacobian as {@link #jacobian(double, double[], double[][])} and df/dt at (t, y) by a forward difference
-     * of step dt of the elements that read a ramping input ({@link CircuitModel#jacobian}); not counted as an
-     * evaluation of the equations.
+     * of step dt of the elements that read a ramping input ({@link CircuitModel#jacobian}; ft null: the Jacobian
+     * only); not counted as an evaluation of the equations. Its buffers are allocated on the first call.
      */
     void jacobian(double t, double[] y, double[][] jac, double dt, double[] ft) {
         if (jacobianWork == null) {

@@ -576,15 +576,13 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
                 }
             });
         }
-        if (ftFilled) {
-            // the source differenced only what depends on time
-        } else if (timeDependentHere) {
+        if (!timeDependentHere) {
+            java.util.Arrays.fill(ft, 0.0);
+        } else if (!ftFilled) {
             double[] fT = computeDerivatives(t + dt, y);
             for (int i = 0; i < n; i++) {
                 ft[i] = (fT[i] - f0[i]) / dt;
             }
-        } else {
-            java.util.Arrays.fill(ft, 0.0);
         }
         jacobians++;
     }
