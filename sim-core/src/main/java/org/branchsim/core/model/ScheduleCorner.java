@@ -10,15 +10,17 @@ import java.util.Locale;
 final class ScheduleCorner implements Discontinuity {
     private final String input;
     private final double time;
+    private final String description;
 
     ScheduleCorner(String input, double time) {
         this.input = input;
         this.time = time;
+        this.description = String.format(Locale.ROOT, "%s changes at t = %.6g s", input, time);
     }
 
     @Override
     public String description() {
-        return String.format(Locale.ROOT, "%s changes at t = %.6g s", input, time);
+        return description;
     }
 
     @Override

@@ -274,14 +274,17 @@ public final class TravelLimitedMass implements Member {
     /** The event of one stop: reaching it while free, or leaving it while held. */
     private final class Stop implements Discontinuity {
         private final boolean isLower;
+        private final String description;
 
         Stop(boolean isLower) {
             this.isLower = isLower;
+            this.description = String.format(Locale.ROOT, "%s.%s at %s", owner, name,
+                    isLower ? lowerStopName : upperStopName);
         }
 
         @Override
         public String description() {
-            return String.format(Locale.ROOT, "%s.%s at %s", owner, name, isLower ? lowerStopName : upperStopName);
+            return description;
         }
 
         @Override

@@ -155,4 +155,23 @@ class RosenbrockIntegratorTest {
         assertEquals(3, p.groupCount());
         assertEquals(n, SparsityPattern.dense(n).groupCount());
     }
+
+    /**
+     * The step-size factor's power x^(-1/order) by roots agrees with the general power (the identity
+     * x^(-1/4) = 1/sqrt(sqrt(x)), x^(-1/3) = 1/cbrt(x)) to 1e-14 relative over the error norms a controller
+     * meets (1e-10 to 1e4): the general power's exponent -1/3 is itself rounded, which moves its result by up to
+     * |ln x| 6e-17 relative, some 1.4e-15 at 1e-10; and the general power is kept for other orders.
+     */
+    @Test
+    void stepFactorPowerByRootsMatchesTheGeneralPower() {
+        for (int order = 2; order <= 5; order++) {
+            for (double x = 1e-10; x < 1e4; x *= 1.37) {
+                double expected = StrictMath.pow(x, -1.0 / order);
+                double got = RosenbrockIntegrator.inverseRoot(x, order);
+                assertEquals(expected, got, 1e-14 * expected, "order " + order + ", x = " + x);
+            }
+        }
+        assertEquals(0.5, RosenbrockIntegrator.inverseRoot(16.0, 4), 0.0);
+        assertEquals(0.5, RosenbrockIntegrator.inverseRoot(8.0, 3), 0.0);
+    }
 }
