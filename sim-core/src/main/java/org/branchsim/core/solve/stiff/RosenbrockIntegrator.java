@@ -533,7 +533,8 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
 
     /**
      * x^(-1/order), the step-size factor's power of the error norm: by square or cube roots for orders 4 and 3
-     * (correctly rounded, a few nanoseconds; the general power costs some 150 ns a call, about 2 % of a step).
+     * (correctly rounded and cheap; Hipparchus' general power held about 2 % of a warm clamp run's CPU samples in
+     * a JFR profile).
      */
     static double inverseRoot(double x, int order) {
         switch (order) {

@@ -159,8 +159,9 @@ class RosenbrockIntegratorTest {
     /**
      * The step-size factor's power x^(-1/order) by roots agrees with the general power (the identity
      * x^(-1/4) = 1/sqrt(sqrt(x)), x^(-1/3) = 1/cbrt(x)) to 1e-14 relative over the error norms a controller
-     * meets (1e-10 to 1e4): the general power's exponent -1/3 is itself rounded, which moves its result by up to
-     * |ln x| 6e-17 relative, some 1.4e-15 at 1e-10; and the general power is kept for other orders.
+     * meets (1e-10 to 1e4): the general power's exponent -1/3 is itself rounded (by up to 2.8e-17, half a unit in
+     * the last place of 1/3), which moves its result by up to |ln x| 2.8e-17 relative, 6.4e-16 at 1e-10, beside
+     * each function's own rounding; and the general power is kept for other orders.
      */
     @Test
     void stepFactorPowerByRootsMatchesTheGeneralPower() {
