@@ -150,19 +150,33 @@ public final class HydraulicLine implements Element {
             double drop = PipeFriction.pressureDrop(q, diameter, dx, density, nu);
             e.derivative(flows[i], inertiaFactor * (pressureAt(e, i) - pressureAt(e, i + 1) - drop));
             frictionPower += drop * q;
+            if (e.partials()) {
+                e.derivativePartial(flows[i], pressures[i], inertiaFactor);
+                e.derivativePartial(flows[i], pressures[i + 1], -inertiaFactor);
+                e.derivativePartial(flows[i], flows[i],
+                        -inertiaFactor * PipeFriction.pressureDropSlope(q, diameter, dx, density, nu));
+            }
         }
         for (int i = 1; i < segments; i++) {
             double p = e.value(pressures[i]);
             double net = e.value(flows[i - 1]) - e.value(flows[i]);
-            e.derivative(pressures[i], Compressibility.pressureRate(fluid.effectiveBulkModulus(p, wallModulus),
-                    segmentVolume, net));
+            double beta = fluid.effectiveBulkModulus(p, wallModulus);
+            e.derivative(pressures[i], Compressibility.pressureRate(beta, segmentVolume, net));
+            if (e.partials()) {
+                e.derivativePartial(pressures[i], flows[i - 1], beta / segmentVolume);
+                e.derivativePartial(pressures[i], flows[i], -beta / segmentVolume);
+                e.derivativePartial(pressures[i], pressures[i],
+                        fluid.bulkModulusSlope(p, wallModulus) / segmentVolume * net);
+            }
         }
         double q1 = e.value(flows[0]);
         double qN = e.value(flows[segments - 1]);
         e.inflow(a, -q1);
         e.inflow(b, qN);
-        endVolume(e, a, 0.5 * segmentVolume);
-        endVolume(e, b, 0.5 * segmentVolume);
+        e.inflowPartial(a, flows[0], -1.0);
+        e.inflowPartial(b, flows[segments - 1], 1.0);
+        endVolume(e, a, pressures[0], 0.5 * segmentVolume);
+        endVolume(e, b, pressures[segments], 0.5 * segmentVolume);
         if (e.recording()) {
             double pa = e.pressure(a);
             double pb = e.pressure(b);
@@ -174,13 +188,28 @@ public final class HydraulicLine implements Element {
         }
     }
 
-    /** Adds half a segment's volume to a port node, scaled so that it brings the line's compliance. */
-    private void endVolume(Evaluation e, Node node, double volume) {
+    /**
+     * Adds half a segment's volume to a port node, scaled by beta_node(p) / beta_line(p) so that it brings the
+     * line's compliance, and its slope with the node's pressure (quotient rule on the two bulk moduli).
+     */
+    private void endVolume(Evaluation e, Node node, StateSlot pressure, double volume) {
         if (node.isTank()) {
             return;
         }
         double p = e.pressure(node);
-        double scale = fluid.effectiveBulkModulus(p, node.wallBulkModulus()) / fluid.effectiveBulkModulus(p, wallModulus);
-        e.volume(node, volume * scale);
+        double nodeModulus = fluid.effectiveBulkModulus(p, node.wallBulkModulus());
+        double lineModulus = fluid.effectiveBulkModulus(p, wallModulus);
+        e.volume(node, volume * nodeModulus / lineModulus);
+        if (e.partials()) {
+            double nodeSlope = fluid.bulkModulusSlope(p, node.wallBulkModulus());
+            double lineSlope = fluid.bulkModulusSlope(p, wallModulus);
+            e.volumePartial(node, pressure,
+                    volume * (nodeSlope * lineModulus - nodeModulus * lineSlope) / (lineModulus * lineModulus));
+        }
+    }
+
+    @Override
+    public boolean suppliesPartials() {
+        return true;
     }
 }

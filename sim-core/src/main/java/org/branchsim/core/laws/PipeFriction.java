@@ -48,6 +48,28 @@ public final class PipeFriction {
     }
 
     /**
+     * @param re Reynolds number (positive)
+     * @return d(lambda)/d(Re) of {@link #darcyFactor}: -64/Re^2 laminar, -lambda_B/(4 Re) for Blasius, and the
+     *         product rule through the smoothstep s(f) = 3f^2 - 2f^3, f = (Re - 2000)/2000, between them
+     */
+    public static double darcyFactorSlope(double re) {
+        if (re <= LAMINAR_LIMIT) {
+            return -64.0 / (re * re);
+        }
+        double turbulent = blasius(re);
+        double turbulentSlope = -0.25 * turbulent / re;
+        if (re >= TURBULENT_LIMIT) {
+            return turbulentSlope;
+        }
+        double width = TURBULENT_LIMIT - LAMINAR_LIMIT;
+        double f = (re - LAMINAR_LIMIT) / width;
+        double s = f * f * (3.0 - 2.0 * f);
+        double sSlope = 6.0 * f * (1.0 - f) / width;
+        double laminar = 64.0 / re;
+        return sSlope * (turbulent - laminar) + (1.0 - s) * (-laminar / re) + s * turbulentSlope;
+    }
+
+    /**
      * @param q volume flow, m^3/s (either sign)
      * @param diameter inner diameter, m
      * @param length pipe length, m
@@ -64,5 +86,28 @@ public final class PipeFriction {
         }
         double v = q / area;
         return darcyFactor(re) * (length / diameter) * 0.5 * density * v * Math.abs(v);
+    }
+
+    /**
+     * The slope of {@link #pressureDrop} with the flow: the Hagen-Poiseuille resistance 128 rho nu L / (pi d^4)
+     * while laminar, else, from dp = lambda(Re) (L/d) rho v|v|/2 with Re = |v| d/nu,
+     * d(dp)/dq = (L/d) (rho/2) (|v|/A) (2 lambda + Re lambda'(Re)) (for Blasius 7/4 of dp/q).
+     *
+     * @param q volume flow, m^3/s (either sign)
+     * @param diameter inner diameter, m
+     * @param length pipe length, m
+     * @param density kg/m^3
+     * @param nu kinematic viscosity, m^2/s
+     * @return d(dp)/dq, Pa s/m^3 (positive)
+     */
+    public static double pressureDropSlope(double q, double diameter, double length, double density, double nu) {
+        double area = 0.25 * Math.PI * diameter * diameter;
+        double speed = Math.abs(q) / area;
+        double re = reynolds(speed, diameter, nu);
+        if (re <= LAMINAR_LIMIT) {
+            return 128.0 * density * nu * length / (Math.PI * Math.pow(diameter, 4));
+        }
+        return (length / diameter) * 0.5 * density * speed / area
+                * (2.0 * darcyFactor(re) + re * darcyFactorSlope(re));
     }
 }

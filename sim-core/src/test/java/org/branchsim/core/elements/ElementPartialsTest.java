@@ -86,6 +86,25 @@ class ElementPartialsTest {
     }
 
     /**
+     * Hydraulic lines of one and of three segments, a stiff hose wall and a rigid tube, between volume nodes and
+     * into a tank. Segment flows are drawn within +-1 m/s of mean speed: in the 12 mm line that is laminar
+     * (Re up to 375), in the 250 mm one it spans the laminar law, the transition band and Blasius (Re up to 7800).
+     */
+    @Test
+    void hydraulicLinesAgreeWithCentralDifferences() {
+        Node tank = Node.tank("tank", 0.0);
+        Node a = Node.volume("a", 0.2e-3, 1e9, 0.0);
+        Node b = Node.volume("b", 0.1e-3, Double.POSITIVE_INFINITY, 0.0);
+        CircuitModel model = new CircuitBuilder("lines", AIRY_OIL).add(tank).add(a).add(b)
+                .add(new Pump("pump", tank, a, 1e-6, 150.0, 0.95))
+                .add(new HydraulicLine("hose", a, b, 2.0, 12e-3, 0.8e9, 3))
+                .add(new HydraulicLine("pipe", b, tank, 0.5, 0.25, Double.POSITIVE_INFINITY, 1))
+                .add(new HydraulicLine("manifold", a, tank, 1.5, 0.25, 2e9, 3))
+                .build();
+        checkRandomStates(model, 19, true);
+    }
+
+    /**
      * The mobile-arm demo holds a compensated pump, which supplies no partials: its block is differenced, so, as for
      * {@link #elementsWithoutPartialsFallBackToTheirOwnDifferences}, only at spread pressures.
      */

@@ -61,6 +61,39 @@ class LineAndGasLawsTest {
         }
     }
 
+    /**
+     * The slope of the drop with the flow: the Hagen-Poiseuille resistance 128 rho nu L/(pi d^4) while laminar
+     * (White, Fluid Mechanics, the laminar pipe flow solution: the drop is linear in the flow, slope = drop/flow), 7/4
+     * of drop/flow in the Blasius range (lambda ~ Re^-1/4, so the drop goes as q^(7/4)), and, through the transition
+     * band (common practice, no source), the limit of the drop's own difference quotient on both sides of each flow.
+     */
+    @Test
+    void frictionSlopeFollowsTheLaws() {
+        double d = 10e-3;
+        double nu = 46e-6;
+        double area = 0.25 * Math.PI * d * d;
+        double laminarFlow = 500 * nu / d * area;
+        double resistance = 128.0 * RHO * nu / (Math.PI * Math.pow(d, 4));
+        assertEquals(PipeFriction.pressureDrop(laminarFlow, d, 1.0, RHO, nu) / laminarFlow,
+                PipeFriction.pressureDropSlope(laminarFlow, d, 1.0, RHO, nu), 1e-12 * resistance);
+        assertEquals(resistance, PipeFriction.pressureDropSlope(-laminarFlow, d, 1.0, RHO, nu), 1e-12 * resistance);
+        for (double re : new double[] {5e3, 2e4, 8e4}) {
+            double q = re * nu / d * area;
+            double drop = PipeFriction.pressureDrop(q, d, 1.0, RHO, nu);
+            assertEquals(1.75 * drop / q, PipeFriction.pressureDropSlope(q, d, 1.0, RHO, nu), 1e-12 * drop / q,
+                    "Blasius at Re = " + re);
+            assertEquals(1.75 * drop / q, PipeFriction.pressureDropSlope(-q, d, 1.0, RHO, nu), 1e-12 * drop / q);
+        }
+        for (double re = 2050; re < 4000; re += 150) {
+            double q = re * nu / d * area;
+            double h = 1e-7 * q;
+            double quotient = (PipeFriction.pressureDrop(q + h, d, 1.0, RHO, nu)
+                    - PipeFriction.pressureDrop(q - h, d, 1.0, RHO, nu)) / (2 * h);
+            assertEquals(quotient, PipeFriction.pressureDropSlope(q, d, 1.0, RHO, nu), 1e-6 * quotient,
+                    "transition at Re = " + re);
+        }
+    }
+
     @Test
     void boyleAndPoisson() {
         // Given 0.5 L precharged to 50 bar(g), charged to 140 bar(g): V_gas = 0.1809 L isothermal (Boyle),

@@ -13,8 +13,7 @@ import org.branchsim.core.settings.SolverSettings;
 import org.junit.jupiter.api.Test;
 
 /**
- * The Jacobian of a circuit of the accumulator (closed-form partials) and the hydraulic line (the per-element
- * finite-difference fallback) against central differences of the whole right-hand side, at the start and along a
+ * The Jacobian of a circuit of the accumulator and the hydraulic line (both with closed-form partials) against central differences of the whole right-hand side, at the start and along a
  * run in which the accumulator charges through a short line. Sources and tolerance: {@link JacobianAgreement}
  * (Dennis and Schnabel 1983, ch. 5). The accumulator's inlet is laminar over only a few Pa about zero pressure
  * drop: a fallback quotient with the step eps^(1/3) max(|p|, s), 84 Pa at 140 bar, missed its slope by 85 % and
