@@ -39,8 +39,14 @@ import org.branchsim.core.units.Dimension;
  * takes: the outlet then stays within the compensator's droop k (x_max - x_0)/A_c' above the setting. Steady flow
  * forces on the spool and the pistons' own swivel torques are neglected. Control oil returns to the inlet (case
  * drain into the tank). Sources: Manring, Hydraulic Control Systems, Wiley 2005 (pressure-compensated pump);
- * Merritt 1967 (orifice, compressibility). See docs/theory.md 6.13. The Jacobian is differenced (no closed-form
- * partials).
+ * Merritt 1967 (orifice, compressibility). See docs/theory.md 6.13.
+ *
+ * <p>Partial derivatives in closed form: the delivery's dQ/ds = -eta_v D_max omega f(theta) / S while 0 &lt;= s &lt;= S
+ * (zero where eps is clamped) and dQ/dtheta = eta_v D_max eps omega f'(theta); each compensator edge's dq/d(dp) by
+ * {@link OrificeLaw#slope} and dq/d(opening) = q/opening + dq/d(dp_t) d(dp_t)/d(opening), d(dp_t)/d(opening) =
+ * -2 dp_t/opening (zero while the edge is closed); the bleed's dq/d(dp); the displacement flows' A_c' and A_y per
+ * velocity; the control chamber's d(dp_c/dt) = beta/V dQ_c plus beta'(p_c) Q_c/V per p_c and -beta Q_c A_y/V^2 per s;
+ * and the member forces' pressure areas, spring rates and damping coefficients (see {@link #suppliesPartials}).
  */
 public final class CompensatedPump implements Element, PeriodicDrive {
 
@@ -229,13 +235,109 @@ public final class CompensatedPump implements Element, PeriodicDrive {
         if (opening <= 0.0) {
             return 0.0;
         }
-        double transition = transitionConstant / (4.0 * opening * opening);
-        return OrificeLaw.flow(comp.cd(), comp.width() * opening, dp, fluid.density(), transition);
+        return OrificeLaw.flow(comp.cd(), comp.width() * opening, dp, fluid.density(), edgeTransition(opening));
+    }
+
+    /** @return the edge's transition pressure dp_t = K / (4 opening^2), Pa (opening positive, m) */
+    private double edgeTransition(double opening) {
+        return transitionConstant / (4.0 * opening * opening);
+    }
+
+    /** @return dq/d(dp) of {@link #edgeFlow}, m^3/(s Pa); zero while the edge is closed (opening &lt;= 0) */
+    private double edgePressureSlope(double opening, double dp) {
+        if (opening <= 0.0) {
+            return 0.0;
+        }
+        return OrificeLaw.slope(comp.cd(), comp.width() * opening, dp, fluid.density(), edgeTransition(opening));
+    }
+
+    /**
+     * @return dq/d(opening) of {@link #edgeFlow}, m^2/s: through the area, dq/dA w = q/opening, and through the
+     *         transition pressure, dq/d(dp_t) (-2 dp_t/opening); zero while the edge is closed (opening &lt;= 0)
+     */
+    private double edgeOpeningSlope(double opening, double dp) {
+        if (opening <= 0.0) {
+            return 0.0;
+        }
+        double area = comp.width() * opening;
+        double transition = edgeTransition(opening);
+        double q = OrificeLaw.flow(comp.cd(), area, dp, fluid.density(), transition);
+        double transitionSlope = OrificeLaw.transitionSlope(comp.cd(), area, dp, fluid.density(), transition);
+        return q / opening + transitionSlope * (-2.0 * transition / opening);
     }
 
     /** @return displacement fraction eps = 1 - s/S at yoke stroke s */
     private double fractionAt(double stroke) {
         return Math.max(0.0, Math.min(1.0, 1.0 - stroke / piston.stroke()));
+    }
+
+    /** @return d(eps)/ds at yoke stroke s, 1/m: -1/S for 0 &lt;= s &lt;= S, zero where eps is clamped */
+    private double fractionSlope(double stroke) {
+        return stroke >= 0.0 && stroke <= piston.stroke() ? -1.0 / piston.stroke() : 0.0;
+    }
+
+    /**
+     * @return true: {@link #evaluate} adds the partials of the delivery, the compensator's edge, bleed and
+     *         displacement flows, the control chamber's pressure rate and both members' forces in closed form
+     */
+    @Override
+    public boolean suppliesPartials() {
+        return true;
+    }
+
+    /**
+     * Partials of the compensator's node flows: the feed q_f(x - x_0, p_out - p_c) from the outlet to the inlet,
+     * the drain q_d(x_0 - x, p_c - p_in) and bleed q_b(p_c - p_in) into the inlet, and the displacement flows
+     * -A_c' x' into the outlet and A_c' x' + A_y s' into the inlet.
+     *
+     * @param feedSlope dq_f/d(p_out - p_c), m^3/(s Pa)
+     * @param feedOpeningSlope dq_f/d(x - x_0), m^2/s
+     * @param returnSlope d(q_d + q_b)/d(p_c - p_in), m^3/(s Pa)
+     * @param drainOpeningSlope dq_d/d(x_0 - x), m^2/s
+     */
+    private void flowPartials(Evaluation e, double feedSlope, double feedOpeningSlope, double returnSlope,
+                              double drainOpeningSlope) {
+        e.flow(outlet, inlet, 0.0, feedSlope, 0.0);
+        e.flowPartial(outlet, inlet, control, -feedSlope);
+        e.flowPartial(outlet, inlet, spool.positionSlot(), feedOpeningSlope);
+        e.inflowPartial(inlet, control, returnSlope);
+        e.inflowPartial(inlet, inlet, -returnSlope);
+        e.inflowPartial(inlet, spool.positionSlot(), -drainOpeningSlope);
+        e.inflowPartial(outlet, spool.velocitySlot(), -comp.area());
+        e.inflowPartial(inlet, spool.velocitySlot(), comp.area());
+        e.inflowPartial(inlet, yoke.velocitySlot(), piston.area());
+    }
+
+    /**
+     * Partials of dp_c/dt = beta(p_c)/V Q_c with V = V_0 + A_y s and Q_c = q_f - q_d - q_b - A_y s': beta/V dQ_c/d(.),
+     * plus beta'(p_c) Q_c/V per p_c and -beta Q_c A_y/V^2 per s (arguments as {@link #flowPartials}).
+     */
+    private void chamberPartials(Evaluation e, double beta, double volume, double inflow, double feedSlope,
+                                 double feedOpeningSlope, double returnSlope, double drainOpeningSlope) {
+        double k = beta / volume;
+        double ay = piston.area();
+        e.derivativePartial(control, outlet, k * feedSlope);
+        e.derivativePartial(control, control, -k * (feedSlope + returnSlope)
+                + fluid.bulkModulusSlope(e.value(control), Double.POSITIVE_INFINITY) / volume * inflow);
+        e.derivativePartial(control, inlet, k * returnSlope);
+        e.derivativePartial(control, spool.positionSlot(), k * (feedOpeningSlope + drainOpeningSlope));
+        e.derivativePartial(control, yoke.positionSlot(), -k * inflow * ay / volume);
+        e.derivativePartial(control, yoke.velocitySlot(), -k * ay);
+    }
+
+    /**
+     * Member force partials: the spool's dF/dp_out = A_c', dF/dp_in = -A_c', dF/dx = -k, dF/dx' = -c; the yoke's
+     * dF/dp_c = A_y, dF/dp_in = -A_y, dF/ds = -k_b, dF/ds' = -c_y.
+     */
+    private void memberPartials(Evaluation e) {
+        spool.forcePartial(e, outlet, comp.area());
+        spool.forcePartial(e, inlet, -comp.area());
+        spool.forcePartial(e, spool.positionSlot(), -comp.springRate());
+        spool.forcePartial(e, spool.velocitySlot(), -comp.damping());
+        yoke.forcePartial(e, control, piston.area());
+        yoke.forcePartial(e, inlet, -piston.area());
+        yoke.forcePartial(e, yoke.positionSlot(), -piston.springRate());
+        yoke.forcePartial(e, yoke.velocitySlot(), -piston.damping());
     }
 
     @Override
@@ -248,13 +350,15 @@ public final class CompensatedPump implements Element, PeriodicDrive {
         double s = yoke.position(e);
         double sDot = yoke.velocity(e);
         double eps = fractionAt(s);
-        double flow = volumetricEfficiency * maxDisplacement * eps * omega;
+        double ripplePart = ripple == null ? 1.0 : ripple.factor(e.value(angle));
+        double flow = volumetricEfficiency * maxDisplacement * eps * omega * ripplePart;
         if (ripple != null) {
-            flow *= ripple.factor(e.value(angle));
             e.derivative(angle, omega);
         }
-        double qFeed = edgeFlow(x - comp.nullTravel(), pOut - pc);
-        double qDrain = edgeFlow(comp.nullTravel() - x, pc - pIn);
+        double feedOpening = x - comp.nullTravel();
+        double drainOpening = comp.nullTravel() - x;
+        double qFeed = edgeFlow(feedOpening, pOut - pc);
+        double qDrain = edgeFlow(drainOpening, pc - pIn);
         double qBleed = OrificeLaw.flow(comp.cd(), bleedArea, pc - pIn, fluid.density(), bleedTransition);
         e.flow(inlet, outlet, flow);
         e.flow(outlet, inlet, qFeed);
@@ -264,12 +368,28 @@ public final class CompensatedPump implements Element, PeriodicDrive {
         // the spool's end faces and the yoke piston's back displace oil as they move
         e.inflow(outlet, -comp.area() * xDot);
         e.inflow(inlet, comp.area() * xDot + ay * sDot);
-                double chamberInflow = qFeed - qDrain - qBleed - ay * sDot;
+        double chamberInflow = qFeed - qDrain - qBleed - ay * sDot;
         double volume = piston.deadVolume() + ay * s;
-        e.derivative(control, Compressibility.pressureRate(
-                fluid.effectiveBulkModulus(pc, Double.POSITIVE_INFINITY), volume, chamberInflow));
+        double beta = fluid.effectiveBulkModulus(pc, Double.POSITIVE_INFINITY);
+        e.derivative(control, Compressibility.pressureRate(beta, volume, chamberInflow));
         spool.apply(e, spoolForces(e));
         yoke.apply(e, yokeForces(e));
+        if (e.partials()) {
+            double mean = volumetricEfficiency * maxDisplacement * omega;
+            e.flowPartial(inlet, outlet, yoke.positionSlot(), mean * ripplePart * fractionSlope(s));
+            if (ripple != null) {
+                e.flowPartial(inlet, outlet, angle, mean * eps * ripple.slope(e.value(angle)));
+            }
+            double feedSlope = edgePressureSlope(feedOpening, pOut - pc);
+            double feedOpeningSlope = edgeOpeningSlope(feedOpening, pOut - pc);
+            double drainSlope = edgePressureSlope(drainOpening, pc - pIn);
+            double drainOpeningSlope = edgeOpeningSlope(drainOpening, pc - pIn);
+            double bleedSlope = OrificeLaw.slope(comp.cd(), bleedArea, pc - pIn, fluid.density(), bleedTransition);
+            flowPartials(e, feedSlope, feedOpeningSlope, drainSlope + bleedSlope, drainOpeningSlope);
+            chamberPartials(e, beta, volume, chamberInflow, feedSlope, feedOpeningSlope, drainSlope + bleedSlope,
+                    drainOpeningSlope);
+            memberPartials(e);
+        }
         if (e.recording()) {
             e.signal(q, flow);
             e.signal(speedSignal, omega);
