@@ -286,7 +286,8 @@ public final class CompensatedPump implements Element, PeriodicDrive {
     }
 
     /**
-     * Partials of the compensator's node flows: the feed q_f(x - x_0, p_out - p_c) from the outlet to the inlet,
+     * Partials of the compensator's node flows: the feed q_f(x - x_0, p_out - p_c) out of the outlet (into the
+     * control chamber),
      * the drain q_d(x_0 - x, p_c - p_in) and bleed q_b(p_c - p_in) into the inlet, and the displacement flows
      * -A_c' x' into the outlet and A_c' x' + A_y s' into the inlet.
      *
@@ -297,9 +298,9 @@ public final class CompensatedPump implements Element, PeriodicDrive {
      */
     private void flowPartials(Evaluation e, double feedSlope, double feedOpeningSlope, double returnSlope,
                               double drainOpeningSlope) {
-        e.flow(outlet, inlet, 0.0, feedSlope, 0.0);
-        e.flowPartial(outlet, inlet, control, -feedSlope);
-        e.flowPartial(outlet, inlet, spool.positionSlot(), feedOpeningSlope);
+        e.inflowPartial(outlet, outlet, -feedSlope);
+        e.inflowPartial(outlet, control, feedSlope);
+        e.inflowPartial(outlet, spool.positionSlot(), -feedOpeningSlope);
         e.inflowPartial(inlet, control, returnSlope);
         e.inflowPartial(inlet, inlet, -returnSlope);
         e.inflowPartial(inlet, spool.positionSlot(), -drainOpeningSlope);
@@ -361,7 +362,7 @@ public final class CompensatedPump implements Element, PeriodicDrive {
         double qDrain = edgeFlow(drainOpening, pc - pIn);
         double qBleed = OrificeLaw.flow(comp.cd(), bleedArea, pc - pIn, fluid.density(), bleedTransition);
         e.flow(inlet, outlet, flow);
-        e.flow(outlet, inlet, qFeed);
+        e.inflow(outlet, -qFeed); // into the control chamber (chamberInflow below), not to the inlet
         e.inflow(inlet, qDrain + qBleed);
         double xDot = spool.velocity(e);
         double ay = piston.area();

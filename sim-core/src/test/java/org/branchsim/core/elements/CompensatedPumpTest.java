@@ -3,10 +3,15 @@ package org.branchsim.core.elements;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.List;
 import org.branchsim.core.TestFluids;
+import org.branchsim.core.fluid.Fluid;
 import org.branchsim.core.model.CircuitBuilder;
 import org.branchsim.core.model.CircuitModel;
+import org.branchsim.core.model.Evaluation;
+import org.branchsim.core.model.Member;
 import org.branchsim.core.model.Node;
+import org.branchsim.core.model.StateSlot;
 import org.branchsim.core.results.SimulationResult;
 import org.branchsim.core.settings.SolverSettings;
 import org.branchsim.core.solve.Simulator;
@@ -86,5 +91,51 @@ class CompensatedPumpTest {
         assertTrue(peak < 0.01 * SETTING, "steady, not oscillating: " + peak / 1e5 + " bar");
         double eps = steady(r, "pump.displacement.fraction");
         assertTrue(eps > 0.05 && eps < 0.95, "part displacement " + eps);
+    }
+
+    /**
+     * Continuity (the volume balance of every control volume, Merritt, Hydraulic Control Systems, 1967, ch. 3):
+     * in a closed loop of oil, the pump drawing from a volume and delivering into another, an orifice leading back,
+     * no tank, the compressed volumes' rates sum to zero: sum over the nodes and the control chamber of
+     * (V/beta) dp/dt = 0, whatever the states, since every flow leaves one volume and enters another (the spool's
+     * and piston's displacement flows included). Checked with the compensator feeding the control chamber (spool
+     * past its null), draining it (short of the null), and both members moving.
+     */
+    @Test
+    void conservesOilInAClosedLoop() {
+        Fluid oil = TestFluids.referenceOil();
+        double inletVolume = 0.4e-3;
+        double outletVolume = 0.5e-3;
+        Node in = Node.volume("in", inletVolume, Double.POSITIVE_INFINITY, 5e5);
+        Node out = Node.volume("out", outletVolume, Double.POSITIVE_INFINITY, 210e5);
+        CompensatedPump pump = pump(in, out);
+        CircuitModel c = new CircuitBuilder("closed", oil).add(in).add(out).add(pump)
+                .add(new Orifice("load", out, in, 2e-6, 0.61)).build();
+        Member.Mode[] free = new Member.Mode[c.members().size()];
+        java.util.Arrays.fill(free, Member.Mode.FREE);
+        Evaluation work = c.workspace(free, new double[c.accounts().size()]);
+        List<String> names = c.states().stream().map(StateSlot::name).toList();
+        for (double spool : new double[] {0.7e-3, 0.3e-3}) {
+            double[] y = c.initialState();
+            y[names.indexOf("pump.control.p")] = 25e5;
+            y[names.indexOf("pump.compensator.x")] = spool;
+            y[names.indexOf("pump.compensator.v")] = 0.02;
+            y[names.indexOf("pump.yoke.x")] = 4e-3;
+            y[names.indexOf("pump.yoke.v")] = -0.05;
+            double[] rates = new double[y.length];
+            c.evaluate(work, 0.0, y, rates, null, null);
+            double pIn = y[names.indexOf("in.p")];
+            double pOut = y[names.indexOf("out.p")];
+            double pc = y[names.indexOf("pump.control.p")];
+            double chamberVolume = 5e-6 + 0.25 * Math.PI * 16e-3 * 16e-3 * 4e-3;
+            double balance = inletVolume / oil.effectiveBulkModulus(pIn, Double.POSITIVE_INFINITY)
+                    * rates[names.indexOf("in.p")]
+                    + outletVolume / oil.effectiveBulkModulus(pOut, Double.POSITIVE_INFINITY)
+                    * rates[names.indexOf("out.p")]
+                    + chamberVolume / oil.effectiveBulkModulus(pc, Double.POSITIVE_INFINITY)
+                    * rates[names.indexOf("pump.control.p")];
+            double delivery = DISPLACEMENT * SPEED;
+            assertEquals(0.0, balance, 1e-12 * delivery, "spool at " + spool * 1e3 + " mm");
+        }
     }
 }

@@ -38,10 +38,14 @@ class ElementPartialsTest {
     /** Air-laden oil, so that the bulk modulus varies with pressure: 870 kg/m^3, 32 cSt, 1.6 GPa, 0.5 % air. */
     private static final Fluid AIRY_OIL = new Fluid(870.0, 32e-6, 1.6e9, 0.005, 1.4, 313.15);
 
-    /** The demos hold every element type a scenario can name except the orifice, check valve and motor. */
+    /**
+     * The demos hold every element type a scenario can name except the orifice and the pilot-operated relief valve
+     * (their own tests: below and PilotReliefPartialsTest); mobile-arm holds the compensated pump, hydraulic lines,
+     * the accumulator, check valves and the motor.
+     */
     @ParameterizedTest
     @ValueSource(strings = {"fixture-clamp", "gripper-chatter", "pilot-supply-hunting", "press-two-branches",
-        "regulation-characteristic", "feed-stall"})
+        "regulation-characteristic", "feed-stall", "mobile-arm"})
     void demoElementsAgreeWithCentralDifferences(String demo) {
         CircuitModel model = ScenarioLoader.load(Path.of("..", "scenarios", demo + ".json")).circuit();
         checkRandomStates(model, demo.hashCode(), true);
@@ -102,31 +106,6 @@ class ElementPartialsTest {
                 .add(new HydraulicLine("manifold", a, tank, 1.5, 0.25, 2e9, 3))
                 .build();
         checkRandomStates(model, 19, true);
-    }
-
-    /**
-     * The mobile-arm demo holds a compensated pump, which supplies no partials: its block is differenced, so, as for
-     * {@link #elementsWithoutPartialsFallBackToTheirOwnDifferences}, only at spread pressures.
-     */
-    @Test
-    void mobileArmDemoAgreesWithCentralDifferencesAtSpreadPressures() {
-        CircuitModel model = ScenarioLoader.load(Path.of("..", "scenarios", "mobile-arm.json")).circuit();
-        checkRandomStates(model, 23, false);
-    }
-
-    /** The compensated pump supplies no partials: its differenced block agrees with differences of the whole. */
-    @Test
-    void compensatedPumpFallsBackToItsOwnDifferences() {
-        Node tank = Node.tank("tank", 0.0);
-        Node a = Node.volume("a", 0.2e-3, 1e9, 0.0);
-        CompensatedPump.Compensator comp = new CompensatedPump.Compensator(200e5, 6e-3, 50e3, 0.015, 30.0, 0.5e-3,
-                0.8e-3, 2e-3, 0.61);
-        CircuitModel model = new CircuitBuilder("compensated", AIRY_OIL).add(tank).add(a)
-                .add(new CompensatedPump("pump", tank, a, 4e-6, 150.0, 0.95, null, comp,
-                        new CompensatedPump.ControlPiston(16e-3, 10e-3, 5e-6, 1.0, 2000.0, 10e5, 30e5, 0.6e-3)))
-                .add(new Orifice("orifice", a, tank, 3e-6, 0.61))
-                .build();
-        checkRandomStates(model, 17, false);
     }
 
     /**
