@@ -34,6 +34,10 @@ import org.branchsim.core.units.Dimension;
  * above it the pilot flow through the damping orifice drops p_c below p_in until the main poppet lifts, at
  * p_in - p_c = F_m0 / A_s. With a light main spring the inlet stays near the pilot's pressure whatever the
  * flow: the override is small.
+ *
+ * <p>It supplies the closed-form partial derivatives of everything it adds ({@link #suppliesPartials}): the seat
+ * flows' and flow forces' slopes from {@link PoppetGeometry}, the damping orifice's from {@link OrificeLaw}, the
+ * chamber's bulk-modulus slope from {@link Fluid}, as the pilot-operated reducing valve does.
  */
 public final class PilotReliefValve implements Element {
 
@@ -49,7 +53,8 @@ public final class PilotReliefValve implements Element {
     private final TravelLimitedMass mainMember;
     private final TravelLimitedMass pilotMember;
     private double density;
-    private double nu;
+    private double mainTransitionConstant;
+    private double pilotTransitionConstant;
     private double orificeTransition;
     private Fluid fluid;
     private StateSlot chamber;
@@ -116,7 +121,9 @@ public final class PilotReliefValve implements Element {
     public void bind(Binder b) {
         fluid = b.fluid();
         density = fluid.density();
-        nu = fluid.kinematicViscosity();
+        double nu = fluid.kinematicViscosity();
+        mainTransitionConstant = main.transitionConstant(density, nu);
+        pilotTransitionConstant = pilot.transitionConstant(density, nu);
         orificeTransition = OrificeLaw.transitionPressure(orificeCd, OrificeLaw.circularDiameter(orificeArea), density,
                 nu);
         chamber = b.state("chamber.p", Dimension.PRESSURE, inlet.initialPressure(), 1e5);
@@ -152,6 +159,67 @@ public final class PilotReliefValve implements Element {
                 -pilot.flowForce(x, dp), 0.0);
     }
 
+    /**
+     * Main stage partials: the seat flow's dq/d(p_in - p_out) and dq/dx; the inlet's displacement inflow -A_s x'
+     * (d/dx' = -A_s); the poppet force's dF/dp_in = A_s - dF_flow/d(dp), dF/dp_out = dF_flow/d(dp),
+     * dF/dp_c = -A_s, dF/dx = -k_m - dF_flow/dx, dF/dx' = -c_m.
+     */
+    private void mainStagePartials(Evaluation e, double x, double dp) {
+        double slope = main.flowPressureSlope(x, dp, density, mainTransitionConstant);
+        e.flow(inlet, outlet, 0.0, slope, -slope);
+        e.flowPartial(inlet, outlet, mainMember.positionSlot(),
+                main.flowLiftSlope(x, dp, density, mainTransitionConstant));
+        double as = main.seatArea();
+        e.inflowPartial(inlet, mainMember.velocitySlot(), -as);
+        double dFflow = main.flowForcePressureSlope(x, dp);
+        mainMember.forcePartial(e, inlet, as - dFflow);
+        mainMember.forcePartial(e, outlet, dFflow);
+        mainMember.forcePartial(e, chamber, -as);
+        mainMember.forcePartial(e, mainMember.positionSlot(), -main.springRate() - main.flowForceLiftSlope(x, dp));
+        mainMember.forcePartial(e, mainMember.velocitySlot(), -main.damping());
+    }
+
+    /**
+     * Spring chamber partials of dp_c/dt = beta_e(p_c) / V_c Q_c, V_c = V_c0 - A_s x,
+     * Q_c = q_o - q_p + A_s x' - A_p x_p': beta/V_c dQ_c/d(.) per p_in, p_c, p_drain, x_p, x', x_p'; plus
+     * beta Q_c A_s / V_c^2 per x and beta'(p_c) Q_c / V_c per p_c.
+     */
+    private void chamberPartials(Evaluation e, double beta, double vc, double inflow, double dqo, double dqp,
+                                 double dqpdx) {
+        double as = main.seatArea();
+        double k = beta / vc;
+        e.derivativePartial(chamber, inlet, k * dqo);
+        e.derivativePartial(chamber, chamber, k * (-dqo - dqp)
+                + fluid.bulkModulusSlope(e.value(chamber), Double.POSITIVE_INFINITY) / vc * inflow);
+        e.derivativePartial(chamber, drain, k * dqp);
+        e.derivativePartial(chamber, pilotMember.positionSlot(), -k * dqpdx);
+        e.derivativePartial(chamber, mainMember.velocitySlot(), k * as);
+        e.derivativePartial(chamber, pilotMember.velocitySlot(), -k * pilot.seatArea());
+        e.derivativePartial(chamber, mainMember.positionSlot(), k * inflow * as / vc);
+    }
+
+    /**
+     * Pilot stage partials: the seat flow's dq_p/d(p_c - p_drain) and dq_p/dx_p into the drain, with the
+     * displacement inflow's d/dx_p' = A_p; the pilot force's dF/d(p_c - p_drain) = A_p - dF_flow/d(dp),
+     * dF/dx_p = -k_p - dF_flow/dx_p, dF/dx_p' = -c_p.
+     */
+    private void pilotPartials(Evaluation e, double xp, double dp, double dqp, double dqpdx) {
+        e.inflowPartial(drain, chamber, dqp);
+        e.inflowPartial(drain, drain, -dqp);
+        e.inflowPartial(drain, pilotMember.positionSlot(), dqpdx);
+        e.inflowPartial(drain, pilotMember.velocitySlot(), pilot.seatArea());
+        double dFdp = pilot.seatArea() - pilot.flowForcePressureSlope(xp, dp);
+        pilotMember.forcePartial(e, chamber, dFdp);
+        pilotMember.forcePartial(e, drain, -dFdp);
+        pilotMember.forcePartial(e, pilotMember.positionSlot(), -pilot.springRate() - pilot.flowForceLiftSlope(xp, dp));
+        pilotMember.forcePartial(e, pilotMember.velocitySlot(), -pilot.damping());
+    }
+
+    @Override
+    public boolean suppliesPartials() {
+        return true;
+    }
+
     @Override
     public void evaluate(Evaluation e) {
         double pIn = e.pressure(inlet);
@@ -165,18 +233,28 @@ public final class PilotReliefValve implements Element {
         double as = main.seatArea();
         double ap = pilot.seatArea();
 
-        double qm = main.flow(x, pIn - pOut, density, nu);
+        double qm = main.flowAt(x, pIn - pOut, density, mainTransitionConstant);
         double qo = OrificeLaw.flow(orificeCd, orificeArea, pIn - pc, density, orificeTransition);
-        double qp = pilot.flow(xp, pc - pd, density, nu);
+        double qp = pilot.flowAt(xp, pc - pd, density, pilotTransitionConstant);
         e.flow(inlet, outlet, qm);
         e.inflow(inlet, -qo - as * xDot);
         e.inflow(drain, qp + ap * xpDot);
         double chamberInflow = qo - qp + as * xDot - ap * xpDot;
         double vc = chamberVolume - as * x;
-        e.derivative(chamber, Compressibility.pressureRate(fluid.effectiveBulkModulus(pc, Double.POSITIVE_INFINITY), vc,
-                chamberInflow));
+        double beta = fluid.effectiveBulkModulus(pc, Double.POSITIVE_INFINITY);
+        e.derivative(chamber, Compressibility.pressureRate(beta, vc, chamberInflow));
         mainMember.apply(e, mainForces(e));
         pilotMember.apply(e, pilotForces(e));
+        if (e.partials()) {
+            mainStagePartials(e, x, pIn - pOut);
+            double dqo = OrificeLaw.slope(orificeCd, orificeArea, pIn - pc, density, orificeTransition);
+            double dqp = pilot.flowPressureSlope(xp, pc - pd, density, pilotTransitionConstant);
+            double dqpdx = pilot.flowLiftSlope(xp, pc - pd, density, pilotTransitionConstant);
+            e.inflowPartial(inlet, inlet, -dqo);
+            e.inflowPartial(inlet, chamber, dqo);
+            chamberPartials(e, beta, vc, chamberInflow, dqo, dqp, dqpdx);
+            pilotPartials(e, xp, pc - pd, dqp, dqpdx);
+        }
         if (e.recording()) {
             e.signal(qMain, qm);
             e.signal(qOrifice, qo);
