@@ -66,6 +66,7 @@ public final class PilotReducingValve implements Element, ReducingValve {
     private double orificeTransition;
     private Fluid fluid;
     private StateSlot chamber;
+    private PilotStagePartials pilotStage;
     private SignalHandle pIn;
     private SignalHandle pOut;
     private SignalHandle pChamber;
@@ -193,6 +194,8 @@ public final class PilotReducingValve implements Element, ReducingValve {
         orificeTransition = OrificeLaw.roundHoleTransition(OrificeLaw.transitionConstant(orificeCd, density, nu),
                 orificeArea);
         chamber = b.state("chamber.p", Dimension.PRESSURE, 0.0, 1e5);
+        pilotStage = new PilotStagePartials(fluid, chamber, outlet, drain, spool, main.edge().endArea(), poppet, pilot,
+                seatTransitionConstant);
         if (end != null) {
             end.bind(b);
         }
@@ -245,34 +248,6 @@ public final class PilotReducingValve implements Element, ReducingValve {
         spool.forcePartial(e, outlet, -dFflow);
         spool.forcePartial(e, spool.positionSlot(), -main.springRate() - edge.flowForceOpeningSlope(s, dp));
         spool.forcePartial(e, spool.velocitySlot(), -main.damping());
-    }
-
-    /**
-     * Spring chamber partials of dp_c/dt = beta_e(p_c) / V_c Q_c, V_c = V_c0 - A_s y,
-     * Q_c = q_o - q_p + A_s y' - A_p x': beta/V_c dQ_c/dy_j, plus beta Q_c A_s / V_c^2 per y and
-     * beta'(p_c) Q_c / V_c per p_c.
-     */
-    private void chamberPartials(Evaluation e, double beta, double vc, double inflow, double dqo, double dqp,
-                                 double dqpdx) {
-        double as = main.edge().endArea();
-        double k = beta / vc;
-        e.derivativePartial(chamber, outlet, k * dqo);
-        e.derivativePartial(chamber, chamber, k * (-dqo - dqp)
-                + fluid.bulkModulusSlope(e.value(chamber), Double.POSITIVE_INFINITY) / vc * inflow);
-        e.derivativePartial(chamber, drain, k * dqp);
-        e.derivativePartial(chamber, poppet.positionSlot(), -k * dqpdx);
-        e.derivativePartial(chamber, spool.velocitySlot(), k * as);
-        e.derivativePartial(chamber, poppet.velocitySlot(), -k * pilot.seatArea());
-        e.derivativePartial(chamber, spool.positionSlot(), k * inflow * as / vc);
-    }
-
-    /** Pilot poppet force partials: dF/d(p_c - p_d) = A_p - dF_flow/d(dp), dF/dx = -k_p - dF_flow/dx, dF/dx' = -c_p. */
-    private void pilotPartials(Evaluation e, double x, double dp) {
-        double dFdp = pilot.seatArea() - pilot.flowForcePressureSlope(x, dp);
-        poppet.forcePartial(e, chamber, dFdp);
-        poppet.forcePartial(e, drain, -dFdp);
-        poppet.forcePartial(e, poppet.positionSlot(), -pilot.springRate() - pilot.flowForceLiftSlope(x, dp));
-        poppet.forcePartial(e, poppet.velocitySlot(), -pilot.damping());
     }
 
     private Forces spoolForces(StateView s) {
@@ -335,17 +310,8 @@ public final class PilotReducingValve implements Element, ReducingValve {
         poppet.apply(e, poppetForces(e));
         if (e.partials()) {
             mainStagePartials(e, s, p1 - p2);
-            double dqo = OrificeLaw.slope(orificeCd, orificeArea, p2 - pc, density, orificeTransition);
-            double dqp = pilot.flowPressureSlope(x, pc - pd, density, seatTransitionConstant);
-            double dqpdx = pilot.flowLiftSlope(x, pc - pd, density, seatTransitionConstant);
-            e.inflowPartial(outlet, outlet, -dqo);
-            e.inflowPartial(outlet, chamber, dqo);
-            e.inflowPartial(drain, chamber, dqp);
-            e.inflowPartial(drain, drain, -dqp);
-            e.inflowPartial(drain, poppet.positionSlot(), dqpdx);
-            e.inflowPartial(drain, poppet.velocitySlot(), ap);
-            chamberPartials(e, beta, vc, chamberInflow, dqo, dqp, dqpdx);
-            pilotPartials(e, x, pc - pd);
+            pilotStage.add(e, OrificeLaw.slope(orificeCd, orificeArea, p2 - pc, density, orificeTransition), x,
+                    pc - pd, beta, vc, chamberInflow);
         }
         if (e.recording()) {
             e.signal(pIn, p1);

@@ -58,6 +58,7 @@ public final class PilotReliefValve implements Element {
     private double orificeTransition;
     private Fluid fluid;
     private StateSlot chamber;
+    private PilotStagePartials pilotStage;
     private SignalHandle qMain;
     private SignalHandle qOrifice;
     private SignalHandle qDrain;
@@ -127,6 +128,8 @@ public final class PilotReliefValve implements Element {
         orificeTransition = OrificeLaw.transitionPressure(orificeCd, OrificeLaw.circularDiameter(orificeArea), density,
                 nu);
         chamber = b.state("chamber.p", Dimension.PRESSURE, inlet.initialPressure(), 1e5);
+        pilotStage = new PilotStagePartials(fluid, chamber, inlet, drain, mainMember, main.seatArea(), pilotMember,
+                pilot, pilotTransitionConstant);
         mainMember.bind(b, s -> mainForces(s).net(), 0.1);
         pilotMember.bind(b, s -> pilotForces(s).net(), 0.05);
         qMain = b.signal("q", Dimension.VOLUME_FLOW);
@@ -179,42 +182,6 @@ public final class PilotReliefValve implements Element {
         mainMember.forcePartial(e, mainMember.velocitySlot(), -main.damping());
     }
 
-    /**
-     * Spring chamber partials of dp_c/dt = beta_e(p_c) / V_c Q_c, V_c = V_c0 - A_s x,
-     * Q_c = q_o - q_p + A_s x' - A_p x_p': beta/V_c dQ_c/d(.) per p_in, p_c, p_drain, x_p, x', x_p'; plus
-     * beta Q_c A_s / V_c^2 per x and beta'(p_c) Q_c / V_c per p_c.
-     */
-    private void chamberPartials(Evaluation e, double beta, double vc, double inflow, double dqo, double dqp,
-                                 double dqpdx) {
-        double as = main.seatArea();
-        double k = beta / vc;
-        e.derivativePartial(chamber, inlet, k * dqo);
-        e.derivativePartial(chamber, chamber, k * (-dqo - dqp)
-                + fluid.bulkModulusSlope(e.value(chamber), Double.POSITIVE_INFINITY) / vc * inflow);
-        e.derivativePartial(chamber, drain, k * dqp);
-        e.derivativePartial(chamber, pilotMember.positionSlot(), -k * dqpdx);
-        e.derivativePartial(chamber, mainMember.velocitySlot(), k * as);
-        e.derivativePartial(chamber, pilotMember.velocitySlot(), -k * pilot.seatArea());
-        e.derivativePartial(chamber, mainMember.positionSlot(), k * inflow * as / vc);
-    }
-
-    /**
-     * Pilot stage partials: the seat flow's dq_p/d(p_c - p_drain) and dq_p/dx_p into the drain, with the
-     * displacement inflow's d/dx_p' = A_p; the pilot force's dF/d(p_c - p_drain) = A_p - dF_flow/d(dp),
-     * dF/dx_p = -k_p - dF_flow/dx_p, dF/dx_p' = -c_p.
-     */
-    private void pilotPartials(Evaluation e, double xp, double dp, double dqp, double dqpdx) {
-        e.inflowPartial(drain, chamber, dqp);
-        e.inflowPartial(drain, drain, -dqp);
-        e.inflowPartial(drain, pilotMember.positionSlot(), dqpdx);
-        e.inflowPartial(drain, pilotMember.velocitySlot(), pilot.seatArea());
-        double dFdp = pilot.seatArea() - pilot.flowForcePressureSlope(xp, dp);
-        pilotMember.forcePartial(e, chamber, dFdp);
-        pilotMember.forcePartial(e, drain, -dFdp);
-        pilotMember.forcePartial(e, pilotMember.positionSlot(), -pilot.springRate() - pilot.flowForceLiftSlope(xp, dp));
-        pilotMember.forcePartial(e, pilotMember.velocitySlot(), -pilot.damping());
-    }
-
     @Override
     public boolean suppliesPartials() {
         return true;
@@ -247,13 +214,8 @@ public final class PilotReliefValve implements Element {
         pilotMember.apply(e, pilotForces(e));
         if (e.partials()) {
             mainStagePartials(e, x, pIn - pOut);
-            double dqo = OrificeLaw.slope(orificeCd, orificeArea, pIn - pc, density, orificeTransition);
-            double dqp = pilot.flowPressureSlope(xp, pc - pd, density, pilotTransitionConstant);
-            double dqpdx = pilot.flowLiftSlope(xp, pc - pd, density, pilotTransitionConstant);
-            e.inflowPartial(inlet, inlet, -dqo);
-            e.inflowPartial(inlet, chamber, dqo);
-            chamberPartials(e, beta, vc, chamberInflow, dqo, dqp, dqpdx);
-            pilotPartials(e, xp, pc - pd, dqp, dqpdx);
+            pilotStage.add(e, OrificeLaw.slope(orificeCd, orificeArea, pIn - pc, density, orificeTransition), xp,
+                    pc - pd, beta, vc, chamberInflow);
         }
         if (e.recording()) {
             e.signal(qMain, qm);
