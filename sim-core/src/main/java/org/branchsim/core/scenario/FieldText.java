@@ -16,8 +16,7 @@ final class FieldText {
         return switch (f.kind()) {
             case QUANTITY -> {
                 FieldBounds.Range b = f.bounds();
-                yield f.dimension().humanName() + f.sign().text()
-                        + (b == null ? "" : ", " + b.lowText() + " to " + b.highText());
+                yield f.dimension().humanName() + f.sign().text() + (b == null ? "" : ", " + range(f, b));
             }
             case NUMBER -> f.min() == f.max() ? "number " + Units.plain(f.min())
                     : "number " + Units.plain(f.min()) + " to " + Units.plain(f.max());
@@ -30,6 +29,18 @@ final class FieldText {
             case ELEMENT_LIST -> "list of elements";
             case SCHEDULED_VALUE -> "number, or value with the input's unit";
         };
+    }
+
+    /**
+     * @return the bounds as the reference shows them: "LOW to HIGH", or "up to HIGH" when the field's own rule
+     *         (greater than zero, zero or more) already excludes the negative part of its dimension's row (a
+     *         spring preload, a setting: not "≥ 0, -100000 kN to 100000 kN")
+     */
+    private static String range(FieldSpec f, FieldBounds.Range b) {
+        if (f.sign() != FieldSpec.Sign.ANY && b.low() < 0.0) {
+            return "up to " + b.highText();
+        }
+        return b.lowText() + " to " + b.highText();
     }
 
     /** @return the default as the reference shows it, or a word saying there is none */
