@@ -9,22 +9,19 @@ import org.branchsim.core.model.Member;
 import org.branchsim.core.model.PeriodicDrive;
 import org.branchsim.core.model.StateSlot;
 import org.branchsim.core.results.SimulationResult;
-import org.branchsim.core.solve.stiff.DifferenceJacobian;
 
 /**
  * The Jacobian A = df/dy of a circuit's equations dy/dt = f(t, y) over its <em>free</em> states, at one time
  * and state: members held at a seat or stop are left out (their position and velocity are fixed while held).
- * Columns are taken by central differences ({@link DifferenceJacobian}, the integrator's Jacobian code), step
- * {@link #RELATIVE_STEP} times the larger of |y_j| and the state's typical magnitude s_j
- * ({@link StateSlot#absoluteScale()}). The matrix is stored scaled,
+ * The matrix is the integrator's: assembled from the elements' closed-form partial derivatives
+ * ({@link RunEngine#jacobian(double, double[], double[][])}, docs/theory.md 10.1), with the run's member modes, so
+ * a slope is exact also where an opening's laminar region is narrower than any difference step would be. The
+ * matrix is stored scaled,
  * A_s[r][c] = d(y_r / s_r) / d(y_c / s_c) = A[r][c] s_c / s_r, in 1/s: its eigenvalues are those of A, and
  * pressures in Pa next to positions in m no longer make it badly conditioned. Shared by the mode analysis
  * and the operating-point Newton solve.
  */
 public final class Linearisation {
-
-    /** Central-difference step relative to max(|y_j|, s_j). */
-    public static final double RELATIVE_STEP = 1e-6;
 
     private final double time;
     private final List<StateSlot> states;
@@ -90,29 +87,18 @@ public final class Linearisation {
         int n = free.size();
         double[] scale = new double[n];
         int[] columns = new int[n];
-        int[] rowOf = new int[y.length];
         for (int k = 0; k < n; k++) {
             scale[k] = free.get(k).absoluteScale();
             columns[k] = engine.position(free.get(k));
-            rowOf[columns[k]] = k;
         }
-        double[] typical = new double[y.length];
-        for (StateSlot s : engine.model().states()) {
-            typical[engine.position(s)] = s.absoluteScale();
-        }
+        double[][] full = new double[y.length][y.length];
+        engine.jacobian(t, y, full);
         double[][] a = new double[n][n];
-        DifferenceJacobian differences = new DifferenceJacobian(DifferenceJacobian.Scheme.CENTRAL, RELATIVE_STEP,
-                typical, DifferenceJacobian.singleColumns(columns));
-        differences.estimate(yy -> {
-            double[] f = new double[yy.length];
-            engine.derivatives(t, yy, f);
-            return f;
-        }, y, null, (j, quotient) -> {
-            int c = rowOf[j];
-            for (int r = 0; r < n; r++) {
-                a[r][c] = quotient.applyAsDouble(columns[r]) * scale[c] / scale[r];
+        for (int r = 0; r < n; r++) {
+            for (int c = 0; c < n; c++) {
+                a[r][c] = full[columns[r]][columns[c]] * scale[c] / scale[r];
             }
-        });
+        }
         return new Linearisation(t, Collections.unmodifiableList(free), scale, a);
     }
 
