@@ -287,9 +287,8 @@ public final class CompensatedPump implements Element, PeriodicDrive {
 
     /**
      * Partials of the compensator's node flows: the feed q_f(x - x_0, p_out - p_c) out of the outlet (into the
-     * control chamber),
-     * the drain q_d(x_0 - x, p_c - p_in) and bleed q_b(p_c - p_in) into the inlet, and the displacement flows
-     * -A_c' x' into the outlet and A_c' x' + A_y s' into the inlet.
+     * control chamber), the drain q_d(x_0 - x, p_c - p_in) and bleed q_b(p_c - p_in) into the inlet, and the
+     * displacement flows -A_c' x' into the outlet and A_c' x' + A_y s' into the inlet.
      *
      * @param feedSlope dq_f/d(p_out - p_c), m^3/(s Pa)
      * @param feedOpeningSlope dq_f/d(x - x_0), m^2/s
