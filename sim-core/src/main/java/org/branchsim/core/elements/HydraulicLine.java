@@ -26,7 +26,9 @@ import org.branchsim.core.units.Dimension;
  * 1/beta_line = 1/beta_fluid(p) + 1/beta_wall (Korteweg; beta_wall = E t / d for a thin-walled tube or a
  * hose's own value, {@link WaveSpeed}); at the port nodes the half-segment volume is added scaled by
  * beta_node / beta_line so that it brings the line's compliance, not the node's. Friction is quasi-steady
- * (no frequency-dependent friction). Waves travel at c = sqrt(beta_line / rho).
+ * (no frequency-dependent friction). Waves travel at c = sqrt(beta_line / rho). The line supplies the closed-form
+ * partial derivatives of everything it adds, the friction's slope from {@link PipeFriction#pressureDropSlope}
+ * (docs/theory.md 10.1).
  */
 public final class HydraulicLine implements Element {
 
