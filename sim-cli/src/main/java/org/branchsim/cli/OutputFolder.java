@@ -3,6 +3,7 @@ package org.branchsim.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.DirectoryNotEmptyException;
 import java.nio.file.FileSystemException;
 import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
@@ -21,6 +22,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
@@ -62,6 +64,8 @@ public final class OutputFolder implements AutoCloseable {
     private static final String OLD_TAG = ".branchsim-old-";
     private static final int MAX_NAME_IN_SIBLINGS = 100;
     private static final int SWAP_ATTEMPTS = 20;
+    /** Longest time a discarded result's deletion waits for writers still finishing a file, ms. */
+    private static final long SETTLE_MILLIS = 2000;
     /** Files a branchsim command writes, for folders written before the marker existed. */
     private static final Pattern OUTPUT_NAME = Pattern.compile(
             "(trace\\.csv|metrics\\.json|summary\\.(txt|csv)|runs\\.csv|statistics\\.csv|modes\\.(json|csv)"
@@ -265,7 +269,7 @@ public final class OutputFolder implements AutoCloseable {
         state = State.DISCARDED;
         OPEN.remove(this);
         try {
-            deleteTree(temp);
+            deleteSettled(temp);
             for (int i = createdParents.size() - 1; i >= 0; i--) {
                 Files.deleteIfExists(createdParents.get(i));
             }
@@ -390,6 +394,33 @@ public final class OutputFolder implements AutoCloseable {
                 Files.move(newest, target, StandardCopyOption.ATOMIC_MOVE);
             } catch (IOException e) {
                 // another run restored or replaced it
+            }
+        }
+    }
+
+    /**
+     * Deletes a discarded temporary folder. Figures are written on other threads ({@link #writeAll}); one that was
+     * already writing when the folder was discarded (a signal ends the command while it draws) can add its file
+     * after the folder was listed, and the folder is then not empty when it is removed. The deletion is repeated
+     * until the folder is gone, for at most {@value #SETTLE_MILLIS} ms; a writer that comes later finds no folder
+     * and fails.
+     */
+    private static void deleteSettled(Path root) throws IOException {
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(SETTLE_MILLIS);
+        while (true) {
+            try {
+                deleteTree(root);
+                return;
+            } catch (DirectoryNotEmptyException | NoSuchFileException e) {
+                if (System.nanoTime() > deadline) {
+                    throw e;
+                }
+                try {
+                    Thread.sleep(5);
+                } catch (InterruptedException interrupted) {
+                    Thread.currentThread().interrupt();
+                    throw e;
+                }
             }
         }
     }
