@@ -252,16 +252,16 @@ public final class CompensatedPump implements Element, PeriodicDrive {
     }
 
     /**
+     * @param q the edge's flow {@link #edgeFlow} at this opening and pressure drop, m^3/s
      * @return dq/d(opening) of {@link #edgeFlow}, m^2/s: through the area, dq/dA w = q/opening, and through the
      *         transition pressure, dq/d(dp_t) (-2 dp_t/opening); zero while the edge is closed (opening &lt;= 0)
      */
-    private double edgeOpeningSlope(double opening, double dp) {
+    private double edgeOpeningSlope(double opening, double dp, double q) {
         if (opening <= 0.0) {
             return 0.0;
         }
         double area = comp.width() * opening;
         double transition = edgeTransition(opening);
-        double q = OrificeLaw.flow(comp.cd(), area, dp, fluid.density(), transition);
         double transitionSlope = OrificeLaw.transitionSlope(comp.cd(), area, dp, fluid.density(), transition);
         return q / opening + transitionSlope * (-2.0 * transition / opening);
     }
@@ -381,9 +381,9 @@ public final class CompensatedPump implements Element, PeriodicDrive {
                 e.flowPartial(inlet, outlet, angle, mean * eps * ripple.slope(e.value(angle)));
             }
             double feedSlope = edgePressureSlope(feedOpening, pOut - pc);
-            double feedOpeningSlope = edgeOpeningSlope(feedOpening, pOut - pc);
+            double feedOpeningSlope = edgeOpeningSlope(feedOpening, pOut - pc, qFeed);
             double drainSlope = edgePressureSlope(drainOpening, pc - pIn);
-            double drainOpeningSlope = edgeOpeningSlope(drainOpening, pc - pIn);
+            double drainOpeningSlope = edgeOpeningSlope(drainOpening, pc - pIn, qDrain);
             double bleedSlope = OrificeLaw.slope(comp.cd(), bleedArea, pc - pIn, fluid.density(), bleedTransition);
             flowPartials(e, feedSlope, feedOpeningSlope, drainSlope + bleedSlope, drainOpeningSlope);
             chamberPartials(e, beta, volume, chamberInflow, feedSlope, feedOpeningSlope, drainSlope + bleedSlope,

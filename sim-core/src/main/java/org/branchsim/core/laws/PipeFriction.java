@@ -79,7 +79,7 @@ public final class PipeFriction {
      */
     public static double pressureDrop(double q, double diameter, double length, double density, double nu) {
         double area = 0.25 * Math.PI * diameter * diameter;
-        double laminar = 128.0 * density * nu * length / (Math.PI * Math.pow(diameter, 4)) * q;
+        double laminar = laminarResistance(diameter, length, density, nu) * q;
         double re = reynolds(q / area, diameter, nu);
         if (re <= LAMINAR_LIMIT) {
             return laminar;
@@ -105,9 +105,14 @@ public final class PipeFriction {
         double speed = Math.abs(q) / area;
         double re = reynolds(speed, diameter, nu);
         if (re <= LAMINAR_LIMIT) {
-            return 128.0 * density * nu * length / (Math.PI * Math.pow(diameter, 4));
+            return laminarResistance(diameter, length, density, nu);
         }
         return (length / diameter) * 0.5 * density * speed / area
                 * (2.0 * darcyFactor(re) + re * darcyFactorSlope(re));
+    }
+
+    /** @return the Hagen-Poiseuille resistance 128 rho nu L / (pi d^4), Pa s/m^3 */
+    private static double laminarResistance(double diameter, double length, double density, double nu) {
+        return 128.0 * density * nu * length / (Math.PI * Math.pow(diameter, 4));
     }
 }

@@ -568,7 +568,7 @@ public final class RosenbrockIntegrator extends AdaptiveStepsizeIntegrator {
             int k = Math.min(j, getStepSizeHelper().getMainSetDimension() - 1);
             typical[j] = getStepSizeHelper().getTolerance(k, 0.0) / getStepSizeHelper().getRelativeTolerance(k);
         }
-        return new DifferenceJacobian(DifferenceJacobian.Scheme.FORWARD, SQRT_EPS, typical, pattern.groups());
+        return new DifferenceJacobian(SQRT_EPS, typical, pattern.groups());
     }
 
     /** Finite-difference Jacobian by column groups, and the time derivative f_t. */

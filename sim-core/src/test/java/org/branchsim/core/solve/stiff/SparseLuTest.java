@@ -263,7 +263,7 @@ class SparseLuTest {
             typical[i] = model.states().get(i).absoluteScale();
         }
         double[][] jac = new double[n][n];
-        new DifferenceJacobian(DifferenceJacobian.Scheme.FORWARD, 1e-7, typical, p.groups()).estimate(yp -> {
+        new DifferenceJacobian(1e-7, typical, p.groups()).estimate(yp -> {
             double[] f = new double[n];
             model.evaluate(work, 0.4, yp, f, null, null);
             return f;
